@@ -1,0 +1,123 @@
+// The base-emitter bleed resistor across a pair's output device: the value, and what it costs in gain.
+import { solvePairCurrents, type CompoundTopology } from "./compound";
+import { roundToSeries, type ESeriesName } from "./e-series";
+
+/** The bleed may take at most this share of the driver's current at the lowest operating current (a product decision). */
+export const DEFAULT_BLEED_SHARE = 0.1;
+/** Stepping up the series this many times always clears the share; the cap guards pathological curves. */
+const MAX_SERIES_STEPS = 48;
+
+export interface PairGainModel {
+  driverHfeAt: (icAmps: number) => number;
+  outputHfeAt: (icAmps: number) => number;
+}
+
+export interface BleedInput {
+  topology: CompoundTopology;
+  /** Lowest collector current the pair runs at: where the bleed takes its largest share. */
+  minIcAmps: number;
+  operatingIcAmps: number;
+  outputVbeVolts: number;
+  /** The highest gain the devices may show (max, else typ, corner): the smallest output base current, so the largest bleed share. */
+  highGain: PairGainModel;
+  /** Worst-case gain, which the checks use: the cost in gain is shown on it. */
+  worstGain: PairGainModel;
+  maxShare?: number;
+  series?: ESeriesName;
+}
+
+export interface BleedSuggestion {
+  ohms: number;
+  series: ESeriesName;
+  /** The unrounded resistance the share rule gives before rounding up onto the series. */
+  exactOhms: number;
+  maxShare: number;
+  /** The share of the driver's current the chosen resistor takes at the lowest current, with the highest gains. */
+  shareAtMinIc: number;
+  bleedAmps: number;
+  /** Worst-case pair hFE at the operating current without and with the resistor. */
+  pairHfeWithout: number;
+  pairHfeWith: number;
+  /** Fraction of the pair's gain the resistor costs at the operating current: 1 − hFE(with) / hFE(without). */
+  gainCost: number;
+  /** Same cost at the lowest current, where it is largest. */
+  gainCostAtMinIc: number;
+  formula: string;
+  summary: string;
+}
+
+function shareWith(input: BleedInput, ohms: number): number {
+  return solvePairCurrents({
+    topology: input.topology,
+    pairIcAmps: input.minIcAmps,
+    bleedOhms: ohms,
+    outputVbeVolts: input.outputVbeVolts,
+    ...input.highGain,
+  }).bleedShare;
+}
+
+function worstPairHfe(input: BleedInput, icAmps: number, ohms: number | null): number {
+  return solvePairCurrents({
+    topology: input.topology,
+    pairIcAmps: icAmps,
+    bleedOhms: ohms,
+    outputVbeVolts: input.outputVbeVolts,
+    ...input.worstGain,
+  }).pairHfe;
+}
+
+function nextSeriesValue(ohms: number, series: ESeriesName): number {
+  return roundToSeries(ohms * 1.0001, series, "up");
+}
+
+/**
+ * The smallest series value whose current VBE2 / R is at most `maxShare` of the driver's current
+ * (its emitter current in a Darlington, its collector current in a Sziklai) at the lowest current:
+ * R ≥ VBE2 (1 − share) / (share × IB2), rounded up, so the rounding only lowers the share.
+ */
+export function suggestBleedResistor(input: BleedInput): BleedSuggestion {
+  const maxShare = input.maxShare ?? DEFAULT_BLEED_SHARE;
+  const series = input.series ?? "E24";
+  if (!(maxShare > 0 && maxShare < 1)) throw new RangeError(`bleed share must lie between 0 and 1, got ${maxShare}`);
+  const noBleed = solvePairCurrents({
+    topology: input.topology,
+    pairIcAmps: input.minIcAmps,
+    bleedOhms: null,
+    outputVbeVolts: input.outputVbeVolts,
+    ...input.highGain,
+  });
+  const exactOhms = (input.outputVbeVolts * (1 - maxShare)) / (maxShare * noBleed.outputIbAmps);
+  let ohms = roundToSeries(exactOhms, series, "up");
+  let share = shareWith(input, ohms);
+  for (let step = 0; share > maxShare && step < MAX_SERIES_STEPS; step += 1) {
+    ohms = nextSeriesValue(ohms, series);
+    share = shareWith(input, ohms);
+  }
+  const pairHfeWithout = worstPairHfe(input, input.operatingIcAmps, null);
+  const pairHfeWith = worstPairHfe(input, input.operatingIcAmps, ohms);
+  const gainCostAtMinIc = 1 - worstPairHfe(input, input.minIcAmps, ohms) / worstPairHfe(input, input.minIcAmps, null);
+  const gainCost = 1 - pairHfeWith / pairHfeWithout;
+  const bleedAmps = input.outputVbeVolts / ohms;
+  return {
+    ohms,
+    series,
+    exactOhms,
+    maxShare,
+    shareAtMinIc: share,
+    bleedAmps,
+    pairHfeWithout,
+    pairHfeWith,
+    gainCost,
+    gainCostAtMinIc,
+    formula: "R ≥ VBE2 (1 − s) / (s × IB2), rounded up onto the series; hFE cost = 1 − hFE(with R) / hFE(without)",
+    summary:
+      `A ${formatOhms(ohms)} ${series} bleed resistor takes ${(share * 100).toFixed(1)}% of the driver's current at the lowest IC ` +
+      `(limit ${(maxShare * 100).toFixed(0)}%) and costs ${(gainCost * 100).toFixed(1)}% of the pair's gain at the operating IC.`,
+  };
+}
+
+function formatOhms(ohms: number): string {
+  if (ohms >= 1e6) return `${Number((ohms / 1e6).toPrecision(3))} MΩ`;
+  if (ohms >= 1e3) return `${Number((ohms / 1e3).toPrecision(3))} kΩ`;
+  return `${Number(ohms.toPrecision(3))} Ω`;
+}
