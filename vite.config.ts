@@ -9,6 +9,7 @@ export default defineConfig({
   plugins: underVitest ? [] : [tailwindcss(), reactRouter()],
   server: { host: "127.0.0.1" },
   test: {
+    setupFiles: ["tests/setup/console-guard.ts"],
     projects: [
       {
         extends: true,
@@ -36,6 +37,7 @@ export default defineConfig({
           testTimeout: 60_000,
           hookTimeout: 120_000,
           fileParallelism: false,
+          globalSetup: ["tests/setup/global-integration.ts"],
         },
       },
       {
@@ -47,6 +49,7 @@ export default defineConfig({
           testTimeout: 120_000,
           hookTimeout: 180_000,
           fileParallelism: false,
+          globalSetup: ["tests/setup/global-e2e.ts"],
         },
       },
     ],

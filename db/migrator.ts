@@ -1,13 +1,17 @@
-import path from "node:path";
-import { fileURLToPath } from "node:url";
 import type { QueryInterface, Sequelize } from "sequelize";
-import { SequelizeStorage, Umzug } from "umzug";
+import { SequelizeStorage, Umzug, type MigrationFn } from "umzug";
+import { seeds } from "#seeds/index.ts";
+import { migrations } from "./migrations/index.ts";
 
-const root = path.dirname(path.dirname(fileURLToPath(import.meta.url)));
+interface Step {
+  name: string;
+  up: MigrationFn<QueryInterface>;
+  down: MigrationFn<QueryInterface>;
+}
 
-function createUmzug(sequelize: Sequelize, folder: string, metaTable: string) {
+function createUmzug(sequelize: Sequelize, steps: Step[], metaTable: string) {
   return new Umzug<QueryInterface>({
-    migrations: { glob: ["[0-9]*.ts", { cwd: path.join(root, folder), ignore: ["*.test.ts"] }] },
+    migrations: steps.map((step) => ({ name: step.name, up: step.up, down: step.down })),
     context: sequelize.getQueryInterface(),
     // A distinct model name per table: umzug reuses an already-defined model of the same name.
     storage: new SequelizeStorage({ sequelize, tableName: metaTable, modelName: metaTable }),
@@ -15,14 +19,14 @@ function createUmzug(sequelize: Sequelize, folder: string, metaTable: string) {
   });
 }
 
-/** Schema migrations in db/migrations, recorded in migration_meta. */
+/** Schema migrations (db/migrations), recorded in migration_meta. */
 export function createMigrator(sequelize: Sequelize) {
-  return createUmzug(sequelize, "db/migrations", "migration_meta");
+  return createUmzug(sequelize, migrations, "migration_meta");
 }
 
-/** Demo seeds in seeds/, recorded in their own seeder_meta table. */
+/** Demo seeds (seeds/), recorded in their own seeder_meta table. */
 export function createSeeder(sequelize: Sequelize) {
-  return createUmzug(sequelize, "seeds", "seeder_meta");
+  return createUmzug(sequelize, seeds, "seeder_meta");
 }
 
 /** After the schema went down to zero the demo data is gone with it; forget that it was seeded. */

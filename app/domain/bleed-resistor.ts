@@ -1,11 +1,16 @@
 // The base-emitter bleed resistor across a pair's output device: the value, and what it costs in gain.
+import { formatValue } from "./checks/format";
 import { solvePairCurrents, type CompoundTopology } from "./compound";
 import { roundToSeries, type ESeriesName } from "./e-series";
+import { chooseVbe, type EvaluateOptions } from "./evaluate-part";
+import { hfeAt, worstCaseGain } from "./gain-curve";
+import type { PartSpec } from "./part";
+import { minIcOf, type RequirementSheet } from "./requirement";
 
 /** The bleed may take at most this share of the driver's current at the lowest operating current (a product decision). */
 export const DEFAULT_BLEED_SHARE = 0.1;
-/** Stepping up the series this many times always clears the share; the cap guards pathological curves. */
-const MAX_SERIES_STEPS = 48;
+/** The share falls as R rises, so stepping up clears it; the cap (ten decades of E24) guards pathological curves. */
+const MAX_SERIES_STEPS = 240;
 
 export interface PairGainModel {
   driverHfeAt: (icAmps: number) => number;
@@ -111,13 +116,35 @@ export function suggestBleedResistor(input: BleedInput): BleedSuggestion {
     gainCostAtMinIc,
     formula: "R ≥ VBE2 (1 − s) / (s × IB2), rounded up onto the series; hFE cost = 1 − hFE(with R) / hFE(without)",
     summary:
-      `A ${formatOhms(ohms)} ${series} bleed resistor takes ${(share * 100).toFixed(1)}% of the driver's current at the lowest IC ` +
+      `A ${formatValue(ohms, "Ω")} ${series} bleed resistor takes ${(share * 100).toFixed(1)}% of the driver's current at the lowest IC ` +
       `(limit ${(maxShare * 100).toFixed(0)}%) and costs ${(gainCost * 100).toFixed(1)}% of the pair's gain at the operating IC.`,
   };
 }
 
-function formatOhms(ohms: number): string {
-  if (ohms >= 1e6) return `${Number((ohms / 1e6).toPrecision(3))} MΩ`;
-  if (ohms >= 1e3) return `${Number((ohms / 1e3).toPrecision(3))} kΩ`;
-  return `${Number(ohms.toPrecision(3))} Ω`;
+/** The highest gain a part may show at IC: its max curve, else typ, else the worst case. */
+export function highestGainAt(part: PartSpec, icAmps: number, options: EvaluateOptions = {}): number {
+  return hfeAt(part.gainPoints, icAmps, "max") ?? hfeAt(part.gainPoints, icAmps, "typ") ?? worstCaseGain(part.gainPoints, icAmps, options).hfe;
+}
+
+/** The bleed resistor for a pair of catalogue parts on a sheet: its lowest current, each part's gain curves and VBE. */
+export function suggestBleedForPair(
+  topology: CompoundTopology,
+  driver: PartSpec,
+  output: PartSpec,
+  sheet: RequirementSheet,
+  options: EvaluateOptions & { maxShare?: number } = {},
+): BleedSuggestion {
+  return suggestBleedResistor({
+    topology,
+    minIcAmps: minIcOf(sheet),
+    operatingIcAmps: sheet.operatingIcAmps,
+    outputVbeVolts: chooseVbe(output, sheet.operatingIcAmps, "linear").volts,
+    highGain: { driverHfeAt: (ic) => highestGainAt(driver, ic, options), outputHfeAt: (ic) => highestGainAt(output, ic, options) },
+    worstGain: {
+      driverHfeAt: (ic) => worstCaseGain(driver.gainPoints, ic, options).hfe,
+      outputHfeAt: (ic) => worstCaseGain(output.gainPoints, ic, options).hfe,
+    },
+    maxShare: options.maxShare,
+    series: options.series,
+  });
 }

@@ -1,4 +1,18 @@
-// Each device's own current inside a Darlington or Sziklai pair, solved from the pair's collector current.
+// Darlington and Sziklai pairs from two catalogue parts: each device at its own current, checked on its own numbers.
+import { type CheckResult, type FlagName, mergeFlags, type Verdict, worstVerdict } from "./check-result";
+import { checkBandwidth } from "./checks/bandwidth";
+import { checkCurrent } from "./checks/current";
+import { checkDrive } from "./checks/drive";
+import { formatValue } from "./checks/format";
+import { checkGain, type GainAtCurrent } from "./checks/gain";
+import { checkSaturation } from "./checks/saturation";
+import { checkThermal } from "./checks/thermal";
+import { checkVoltage } from "./checks/voltage";
+import { assessDataQuality } from "./data-quality";
+import { chooseVbe, DEFAULT_VCE_SAT_VOLTS, type EvaluateOptions, findExclusions } from "./evaluate-part";
+import { type GainEstimate, type SaturationEstimate, vceSatAt, worstCaseGain } from "./gain-curve";
+import type { PartSpec, Polarity } from "./part";
+import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
 
 export const COMPOUND_TOPOLOGIES = ["darlington", "sziklai"] as const;
 export type CompoundTopology = (typeof COMPOUND_TOPOLOGIES)[number];
@@ -147,5 +161,337 @@ export function solvePairCurrents(input: PairCurrentsInput): PairCurrents {
     iterations,
     converged,
     feasible: true,
+  };
+}
+
+/** The polarity a pair acts with: its driver's, in both topologies. */
+export function compoundPolarity(driver: PartSpec): Polarity {
+  return driver.polarity;
+}
+
+/** Darlington: driver and output of one polarity; Sziklai: of opposite polarities. */
+export function canPair(topology: CompoundTopology, driver: PartSpec, output: PartSpec): boolean {
+  return topology === "darlington" ? driver.polarity === output.polarity : driver.polarity !== output.polarity;
+}
+
+export interface CompoundOptions extends EvaluateOptions {
+  /** Base-emitter bleed resistor across the output; null or absent when none is fitted. */
+  bleedOhms?: number | null;
+}
+
+export type PairRole = "driver" | "output";
+
+export interface DeviceInPair<P extends PartSpec = PartSpec> {
+  role: PairRole;
+  part: P;
+  /** The device's own collector current at the pair's operating and peak IC. */
+  icAmps: number;
+  peakIcAmps: number;
+  /** Worst-case hFE at its own operating current, with its flags. */
+  gain: GainEstimate;
+  vbeVolts: number;
+  vbeAssumed: boolean;
+  /** The VCE its dissipation uses: the driver's is one VBE2 below the pair's. */
+  vceVolts: number;
+  dissipationWatts: number;
+  junctionC: number | null;
+  checks: CheckResult[];
+}
+
+/** A derived number of the pair, with the formula that gave it. */
+export interface CompoundFigure {
+  symbol: string;
+  label: string;
+  value: number;
+  unit: string;
+  formula: string;
+}
+
+export interface CompoundEvaluation<P extends PartSpec = PartSpec> {
+  topology: CompoundTopology;
+  polarity: Polarity;
+  verdict: Verdict;
+  /** Every check: the devices' own (voltage, current, thermal) and the pair's (gain, drive, saturation, bandwidth). */
+  checks: CheckResult[];
+  flags: FlagName[];
+  devices: { driver: DeviceInPair<P>; output: DeviceInPair<P> };
+  /** Worst-case effective β of the pair at the operating IC, bleed included. */
+  hfeAtOperatingPoint: number;
+  hfeWithoutBleed: number;
+  vbeVolts: number;
+  vceSatVolts: number | null;
+  /** The pair's ratings: the lower VCEO of the two, the output's IC max. */
+  vceoVolts: number;
+  icMaxAmps: number;
+  bleedOhms: number | null;
+  bleedAmps: number;
+  bleedShare: number;
+  currents: PairCurrents;
+  figures: CompoundFigure[];
+  /** Why the pair lies outside the sheet's polarity or packages; empty when eligible. */
+  excludedBy: string[];
+  dataQuality: { score: number; flags: string[] };
+}
+
+const TOPOLOGY_BETA_FORMULA: Record<CompoundTopology, string> = {
+  darlington: "β = β1 β2 + β1 + β2 without bleed; with bleed β = IC / IB, IE1 = IC2 / β2 + VBE2 / Rbleed",
+  sziklai: "β = β1 (β2 + 1) without bleed; with bleed β = IC / IB, IC1 = IB2 + VBE2 / Rbleed",
+};
+
+function solveAt(
+  topology: CompoundTopology,
+  driver: PartSpec,
+  output: PartSpec,
+  icAmps: number,
+  bleedOhms: number | null,
+  outputVbeVolts: number,
+  options: EvaluateOptions,
+): PairCurrents {
+  return solvePairCurrents({
+    topology,
+    pairIcAmps: icAmps,
+    bleedOhms,
+    outputVbeVolts,
+    driverHfeAt: (ic) => worstCaseGain(driver.gainPoints, ic, options).hfe,
+    outputHfeAt: (ic) => worstCaseGain(output.gainPoints, ic, options).hfe,
+  });
+}
+
+/** The pair's gain as one estimate, so the single-device gain check can judge it. */
+function pairGainEstimate(currents: PairCurrents, driverGain: GainEstimate, outputGain: GainEstimate): GainEstimate {
+  const sources = [driverGain.source, outputGain.source];
+  const source = !currents.feasible || sources.includes("none") ? "none" : (sources.find((s) => s !== "min") ?? "min");
+  return {
+    hfe: currents.feasible ? currents.pairHfe : 0,
+    source,
+    typToMinFactor: driverGain.typToMinFactor ?? outputGain.typToMinFactor,
+    flags: mergeFlags(driverGain.flags, outputGain.flags),
+    decadesOffPoint: Math.max(driverGain.decadesOffPoint, outputGain.decadesOffPoint),
+    note:
+      `pair β from β1 ${formatValue(currents.driverHfe, "")} at IC1 ${formatValue(currents.driverIcAmps, "A")} (${driverGain.note}) ` +
+      `and β2 ${formatValue(currents.outputHfe, "")} at IC2 ${formatValue(currents.outputIcAmps, "A")} (${outputGain.note})`,
+  };
+}
+
+function thermalFor(part: PartSpec, role: PairRole, sheet: RequirementSheet, vceVolts: number, icAmps: number): CheckResult {
+  const switching = sheet.mode === "switching";
+  return checkThermal({
+    subject: role,
+    mode: sheet.mode,
+    vceVolts,
+    icAmps,
+    dutyCycle: switching ? sheet.dutyCycle : 1,
+    ambientC: sheet.ambientC,
+    rthJaCPerW: part.rthJaCPerW,
+    rthJcCPerW: part.rthJcCPerW,
+    heatsinkRthCPerW: sheet.heatsinkRthCPerW,
+    tjMaxC: part.tjMaxC,
+    ptotWatts: part.ptotWatts,
+    ptotReference: part.ptotReference,
+    derating: sheet.derating,
+  });
+}
+
+function inputValue(check: CheckResult, symbol: string): number | null {
+  return check.inputs.find((input) => input.symbol === symbol)?.value ?? null;
+}
+
+/** Why a pair lies outside the sheet: the pair's polarity, and each device's package. */
+export function findCompoundExclusions(driver: PartSpec, output: PartSpec, sheet: RequirementSheet): string[] {
+  const reasons: string[] = [];
+  const polarity = compoundPolarity(driver);
+  if (sheet.polarity !== "any" && polarity !== sheet.polarity) {
+    reasons.push(`the pair acts as ${polarity.toUpperCase()}, the sheet asks for ${sheet.polarity.toUpperCase()}`);
+  }
+  const anyPolarity: RequirementSheet = { ...sheet, polarity: "any" };
+  for (const [role, part] of [["driver", driver], ["output", output]] as const) {
+    for (const reason of findExclusions(part, anyPolarity)) reasons.push(`${role}: ${reason}`);
+  }
+  return reasons;
+}
+
+/**
+ * Evaluates a Darlington or Sziklai pair against the sheet. Each device runs at its own current
+ * (solved by solvePairCurrents) and gets its own voltage, current and thermal checks; the pair's
+ * gain, drive, saturation and bandwidth are judged on the pair's own numbers.
+ */
+export function evaluateCompound<P extends PartSpec>(
+  topology: CompoundTopology,
+  driver: P,
+  output: P,
+  sheet: RequirementSheet,
+  options: CompoundOptions = {},
+): CompoundEvaluation<P> {
+  if (!canPair(topology, driver, output)) {
+    throw new RangeError(`a ${topology} pair needs ${topology === "darlington" ? "one polarity" : "opposite polarities"}`);
+  }
+  const bleedOhms = options.bleedOhms ?? null;
+  const switching = sheet.mode === "switching";
+  const icAmps = sheet.operatingIcAmps;
+  const peakIcAmps = peakIcOf(sheet);
+  const peakVceVolts = peakVceOf(sheet);
+  // The output is never saturated in either pair, so its VBE is VBE(on) even when switching.
+  const outputVbe = chooseVbe(output, icAmps, "linear");
+  const solve = (current: number, ohms: number | null) => solveAt(topology, driver, output, current, ohms, outputVbe.volts, options);
+
+  const operating = solve(icAmps, bleedOhms);
+  const peak = peakIcAmps === icAmps ? operating : solve(peakIcAmps, bleedOhms);
+  const withoutBleed = bleedOhms === null ? operating : solve(icAmps, null);
+  const driverGain = worstCaseGain(driver.gainPoints, operating.driverIcAmps, options);
+  const outputGain = worstCaseGain(output.gainPoints, operating.outputIcAmps, options);
+  const driverVbe = chooseVbe(driver, operating.driverIcAmps, sheet.mode);
+  const pairVbeVolts = compoundVbe(topology, driverVbe.volts, outputVbe.volts);
+
+  const gainCurrents = [...new Set([minIcOf(sheet), icAmps, peakIcAmps])];
+  const gains: GainAtCurrent[] = gainCurrents.map((current) => {
+    const currents = current === icAmps ? operating : current === peakIcAmps ? peak : solve(current, bleedOhms);
+    const estimate = pairGainEstimate(
+      currents,
+      worstCaseGain(driver.gainPoints, currents.driverIcAmps, options),
+      worstCaseGain(output.gainPoints, currents.outputIcAmps, options),
+    );
+    return { icAmps: current, estimate };
+  });
+  const pairChecks: CheckResult[] = [
+    { ...checkGain({ requiredHfe: sheet.requiredHfe ?? (switching ? sheet.forcedGain : null), gains }), subject: "pair" },
+  ];
+
+  let drivenForcedGain = sheet.forcedGain;
+  if (sheet.drive != null) {
+    // Switching saturates the driver at the sheet's forced gain; the output takes what the driver's emitter gives.
+    const pairForcedGain = operating.feasible ? (icAmps * sheet.forcedGain) / operating.driverIcAmps : sheet.forcedGain;
+    const drive = checkDrive({
+      subject: "pair",
+      mode: sheet.mode,
+      icAmps,
+      worstHfe: operating.feasible ? operating.pairHfe : 0,
+      forcedGain: pairForcedGain,
+      vbeVolts: pairVbeVolts,
+      vbeAssumed: driverVbe.assumed || outputVbe.assumed,
+      drive: sheet.drive,
+      series: options.series,
+    });
+    pairChecks.push(drive);
+    drivenForcedGain = drive.ibAvailableAmps > 0 ? operating.driverIcAmps / drive.ibAvailableAmps : Number.POSITIVE_INFINITY;
+  }
+
+  let driverSat: SaturationEstimate | null = null;
+  let pairSat: SaturationEstimate | null = null;
+  if (switching) {
+    driverSat = operating.feasible ? vceSatAt(driver.saturationPoints, operating.driverIcAmps) : null;
+    pairSat = driverSat === null ? null : { ...driverSat, volts: compoundVceSat(driverSat.volts, outputVbe.volts) };
+    pairChecks.push(
+      checkSaturation({
+        subject: "pair",
+        icAmps,
+        drivenForcedGain,
+        worstHfe: operating.driverHfe,
+        saturation: pairSat,
+        allowedSatDropVolts: sheet.allowedSatDropVolts,
+      }),
+    );
+  }
+
+  const gainNeeded = sheet.requiredVoltageGain ?? sheet.requiredHfe;
+  if (!switching && sheet.requiredVoltageGain != null && sheet.loadOhms != null) {
+    pairChecks.push({
+      check: "voltage-gain",
+      subject: "pair",
+      verdict: "marginal",
+      margin: null,
+      flags: [],
+      formula: "not modelled for compound pairs",
+      inputs: [{ symbol: "Av(req)", label: "voltage gain the circuit needs", value: sheet.requiredVoltageGain, unit: "" }],
+      summary: "The voltage gain of a compound pair is not modelled here; confirm it on the circuit.",
+    });
+  }
+  if (sheet.bandwidthHz != null && gainNeeded != null) {
+    // The pair is no faster than its slower device.
+    const ftHz = driver.ftHz === null || output.ftHz === null ? null : Math.min(driver.ftHz, output.ftHz);
+    pairChecks.push(checkBandwidth({ subject: "pair", ftHz, bandwidthHz: sheet.bandwidthHz, gainNeeded }));
+  }
+
+  const satVolts = driverSat?.volts ?? sheet.allowedSatDropVolts ?? DEFAULT_VCE_SAT_VOLTS;
+  const driverVce = switching ? satVolts : Math.max(0, operatingVceOf(sheet) - outputVbe.volts);
+  const outputVce = switching ? compoundVceSat(satVolts, outputVbe.volts) : operatingVceOf(sheet);
+  const deviceOf = (role: PairRole, part: P, gain: GainEstimate, vbe: { volts: number; assumed: boolean }, ownIc: number, ownPeakIc: number, vceVolts: number): DeviceInPair<P> => {
+    const thermal = thermalFor(part, role, sheet, vceVolts, ownIc);
+    const checks: CheckResult[] = [
+      checkVoltage({
+        subject: role,
+        // When the pair is off VBE2 collapses, so the driver too stands the full VCE.
+        peakVceVolts,
+        vceoVolts: part.vceoVolts,
+        reverseVbeVolts: role === "driver" ? sheet.reverseVbeVolts : null,
+        veboVolts: part.veboVolts,
+        voltageFraction: sheet.derating.voltageFraction,
+      }),
+      checkCurrent({ subject: role, peakIcAmps: ownPeakIc, icMaxAmps: part.icMaxAmps, currentFraction: sheet.derating.currentFraction }),
+      thermal,
+    ];
+    return {
+      role,
+      part,
+      icAmps: ownIc,
+      peakIcAmps: ownPeakIc,
+      gain,
+      vbeVolts: vbe.volts,
+      vbeAssumed: vbe.assumed,
+      vceVolts,
+      dissipationWatts: inputValue(thermal, "P") ?? 0,
+      junctionC: inputValue(thermal, "Tj"),
+      checks,
+    };
+  };
+  const feasibleOr = (value: number, fallback: number) => (Number.isFinite(value) ? value : fallback);
+  const driverDevice = deviceOf("driver", driver, driverGain, driverVbe, feasibleOr(operating.driverIcAmps, 0), feasibleOr(peak.driverIcAmps, 0), driverVce);
+  const outputDevice = deviceOf("output", output, outputGain, outputVbe, feasibleOr(operating.outputIcAmps, icAmps), feasibleOr(peak.outputIcAmps, peakIcAmps), outputVce);
+
+  const checks = [...pairChecks, ...driverDevice.checks, ...outputDevice.checks];
+  const quality = [assessDataQuality(driver, options), assessDataQuality(output, options)];
+  const qualityFlags = [...new Set(quality.flatMap((q) => q.flags))];
+  const staleFlags: FlagName[] = qualityFlags.includes("stale-datasheet") ? ["stale-datasheet"] : [];
+  const vceoVolts = Math.min(driver.vceoVolts, output.vceoVolts);
+  const figures: CompoundFigure[] = [
+    { symbol: "β", label: "pair current gain, worst case, bleed included", value: operating.pairHfe, unit: "", formula: TOPOLOGY_BETA_FORMULA[topology] },
+    { symbol: "β(no bleed)", label: "pair current gain without the bleed resistor", value: withoutBleed.pairHfe, unit: "", formula: topology === "darlington" ? "β1 β2 + β1 + β2" : "β1 (β2 + 1)" },
+    { symbol: "β1", label: "driver hFE at its own current", value: operating.driverHfe, unit: "", formula: "worst-case hFE at IC1" },
+    { symbol: "IC1", label: "driver collector current", value: operating.driverIcAmps, unit: "A", formula: topology === "darlington" ? "IC1 = α1 (IC2 / β2 + Ibleed)" : "IC1 = IB2 + Ibleed" },
+    { symbol: "β2", label: "output hFE at its own current", value: operating.outputHfe, unit: "", formula: "worst-case hFE at IC2" },
+    { symbol: "IC2", label: "output collector current", value: operating.outputIcAmps, unit: "A", formula: topology === "darlington" ? "IC2 = IC − IC1" : "IC2 = β2 (IC − Ibleed) / (β2 + 1)" },
+    { symbol: "VBE", label: "pair base-emitter voltage", value: pairVbeVolts, unit: "V", formula: topology === "darlington" ? "VBE = VBE1 + VBE2" : "VBE = VBE1" },
+    { symbol: "VCEO", label: "pair VCEO, the lower of the two", value: vceoVolts, unit: "V", formula: "min(VCEO1, VCEO2)" },
+    { symbol: "IC(max)", label: "pair IC max, the output's", value: output.icMaxAmps, unit: "A", formula: "IC max of the output" },
+    { symbol: "P1", label: "driver dissipation", value: driverDevice.dissipationWatts, unit: "W", formula: switching ? "P1 = VCE(sat)1 × IC1 × D" : "P1 = (VCE − VBE2) × IC1" },
+    { symbol: "P2", label: "output dissipation", value: outputDevice.dissipationWatts, unit: "W", formula: switching ? "P2 = (VCE(sat)1 + VBE2) × IC2 × D" : "P2 = VCE × IC2" },
+  ];
+  if (pairSat !== null) figures.push({ symbol: "VCE(sat)", label: "pair saturation voltage", value: pairSat.volts, unit: "V", formula: "VCE(sat) = VCE(sat)1 + VBE2" });
+  if (bleedOhms !== null) {
+    figures.push(
+      { symbol: "Rbleed", label: "bleed resistor across the output's base and emitter", value: bleedOhms, unit: "Ω", formula: "chosen" },
+      { symbol: "Ibleed", label: "bleed current", value: operating.bleedAmps, unit: "A", formula: "Ibleed = VBE2 / Rbleed" },
+      { symbol: "s", label: "share of the driver's current the bleed takes", value: operating.bleedShare, unit: "", formula: topology === "darlington" ? "s = Ibleed / IE1" : "s = Ibleed / IC1" },
+    );
+  }
+  return {
+    topology,
+    polarity: compoundPolarity(driver),
+    verdict: worstVerdict(checks.map((check) => check.verdict)),
+    checks,
+    flags: mergeFlags(...checks.map((check) => check.flags), staleFlags),
+    devices: { driver: driverDevice, output: outputDevice },
+    hfeAtOperatingPoint: operating.feasible ? operating.pairHfe : 0,
+    hfeWithoutBleed: withoutBleed.feasible ? withoutBleed.pairHfe : 0,
+    vbeVolts: pairVbeVolts,
+    vceSatVolts: pairSat?.volts ?? null,
+    vceoVolts,
+    icMaxAmps: output.icMaxAmps,
+    bleedOhms,
+    bleedAmps: operating.bleedAmps,
+    bleedShare: operating.bleedShare,
+    currents: operating,
+    figures,
+    excludedBy: findCompoundExclusions(driver, output, sheet),
+    dataQuality: { score: Math.min(quality[0].score, quality[1].score), flags: qualityFlags },
   };
 }

@@ -5,7 +5,7 @@ import { checkCurrent } from "./checks/current";
 import { checkDrive } from "./checks/drive";
 import { checkGain } from "./checks/gain";
 import { checkSaturation } from "./checks/saturation";
-import { checkThermal } from "./checks/thermal";
+import { checkThermal, dissipationWatts } from "./checks/thermal";
 import { checkVoltage } from "./checks/voltage";
 import { checkVoltageGain } from "./checks/voltage-gain";
 import { assessDataQuality, type DataQuality, type DataQualityOptions } from "./data-quality";
@@ -179,7 +179,7 @@ export function evaluatePart(part: PartSpec, sheet: RequirementSheet, options: E
     vbeVolts: vbe.volts,
     vbeAssumed: vbe.assumed,
     vceSatVolts: saturation?.volts ?? null,
-    dissipationWatts: thermal.inputs.find((input) => input.symbol === "P")?.value ?? 0,
+    dissipationWatts: dissipationWatts(sheet.mode, thermalVce, icAmps, switching ? sheet.dutyCycle : 1),
     junctionC: thermal.inputs.find((input) => input.symbol === "Tj")?.value ?? null,
     suggestedBaseOhms,
     excludedBy: findExclusions(part, sheet),

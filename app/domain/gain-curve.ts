@@ -51,6 +51,7 @@ function interpolateLogLog(curve: CurvePoint[], icAmps: number): number {
   while (curve[upper].icAmps < icAmps) upper += 1;
   const a = curve[upper - 1];
   const b = curve[upper];
+  if (b.icAmps === icAmps) return b.hfe;
   const t = Math.log(icAmps / a.icAmps) / Math.log(b.icAmps / a.icAmps);
   return Math.exp(Math.log(a.hfe) + t * Math.log(b.hfe / a.hfe));
 }
@@ -108,7 +109,7 @@ export function worstCaseGain(points: GainPoint[], icAmps: number, options: Wors
     if (source !== "min") flags.push("no-min-gain");
     if (decadesOffPoint > windowDecades) flags.push("gain-off-point");
     const hfe = interpolateLogLog(curve, icAmps) * scale;
-    const basis = source === "min" ? "hFE min" : `hFE ${corner} × ${scale} (no minimum quoted)`;
+    const basis = source === "min" ? "hFE min" : `hFE ${corner} × ${scale}, no minimum quoted`;
     const where =
       decadesOffPoint > 0
         ? `, held from the nearest quoted point ${decadesOffPoint.toFixed(2)} decades away`

@@ -1,9 +1,23 @@
 // A ranking of single parts against a requirement sheet: scored fits and marginals, and failures with reasons.
 import type { CheckResult, FlagName, Verdict } from "./check-result";
-import { evaluatePart, type PartEvaluation } from "./evaluate-part";
-import { LIFECYCLE_SCORES, chooseOffer, combineScore, DEFAULT_SCORE_WEIGHTS, FULL_MARGIN, scoreCost, scoreDataQuality, scoreMargins, scoreStock, validateWeights, type OrderPrice, type ScoreComponents, type ScoreWeights } from "./score";
+import { type EvaluateOptions, evaluatePart, type PartEvaluation } from "./evaluate-part";
 import type { Lifecycle, Offer, PartSpec } from "./part";
 import type { RequirementSheet } from "./requirement";
+import {
+  chooseOffer,
+  combineScore,
+  DEFAULT_SCORE_WEIGHTS,
+  FULL_MARGIN,
+  LIFECYCLE_SCORES,
+  type OrderPrice,
+  type ScoreComponents,
+  scoreCost,
+  scoreDataQuality,
+  scoreMargins,
+  scoreStock,
+  type ScoreWeights,
+  validateWeights,
+} from "./score";
 
 /** A part with the offers it can be bought from. */
 export interface CatalogueEntry<P extends PartSpec = PartSpec> {
@@ -19,6 +33,8 @@ export interface RankingOptions {
   currency?: string | null;
   /** Margin that counts as full headroom in the score. */
   fullMargin?: number;
+  /** Passed to the evaluation: gain-curve factors, E-series, the date staleness is judged against. */
+  evaluate?: EvaluateOptions;
 }
 
 export interface RankedPart<P extends PartSpec = PartSpec> {
@@ -38,7 +54,13 @@ export interface FailedCandidate<P extends PartSpec = PartSpec> {
   evaluation: PartEvaluation;
 }
 
-export interface Ranking<R, F> {
+export interface ExcludedCandidate<P extends PartSpec = PartSpec> {
+  part: P;
+  /** Why the sheet rules it out before any check: polarity, package. */
+  reasons: string[];
+}
+
+export interface Ranking<R, F, X = never> {
   catalogueVersion: string;
   weights: ScoreWeights;
   orderQuantity: number;
@@ -46,6 +68,8 @@ export interface Ranking<R, F> {
   ranked: R[];
   /** Candidates that failed a check, by manufacturer then part number, with their reasons. */
   failing: F[];
+  /** Candidates outside the sheet's polarity or packages, by manufacturer then part number. */
+  excluded: X[];
 }
 
 /** Plain code-unit order, so rankings agree on every machine and locale. */
@@ -79,20 +103,25 @@ export function readSupply(offers: readonly Offer[], lifecycle: Lifecycle, order
   return { price, stockScore: scoreStock(price?.stock ?? null, orderQuantity), lifecycleScore: LIFECYCLE_SCORES[lifecycle] };
 }
 
-/** Ranks every entry against the sheet; nothing is dropped: each part lands in `ranked` or in `failing`. */
+/** Ranks every entry against the sheet; nothing is dropped: each part lands in `ranked`, `failing` or `excluded`. */
 export function rankParts<P extends PartSpec>(
   entries: readonly CatalogueEntry<P>[],
   sheet: RequirementSheet,
   options: RankingOptions,
-): Ranking<RankedPart<P>, FailedCandidate<P>> {
+): Ranking<RankedPart<P>, FailedCandidate<P>, ExcludedCandidate<P>> {
   const weights = validateWeights(options.weights ?? { ...DEFAULT_SCORE_WEIGHTS });
   const currency = options.currency ?? null;
   const fullMargin = options.fullMargin ?? FULL_MARGIN;
   const passing: { entry: CatalogueEntry<P>; evaluation: PartEvaluation; supply: SupplyFacts }[] = [];
   const failing: FailedCandidate<P>[] = [];
+  const excluded: ExcludedCandidate<P>[] = [];
   let referencePrice: number | null = null;
   for (const entry of entries) {
-    const evaluation = evaluatePart(entry.part, sheet);
+    const evaluation = evaluatePart(entry.part, sheet, options.evaluate);
+    if (evaluation.excludedBy.length > 0) {
+      excluded.push({ part: entry.part, reasons: evaluation.excludedBy });
+      continue;
+    }
     if (evaluation.verdict === "fails") {
       failing.push({ part: entry.part, reasons: failureReasons(evaluation.checks), flags: evaluation.flags, evaluation });
       continue;
@@ -108,7 +137,7 @@ export function rankParts<P extends PartSpec>(
       cost: scoreCost(supply.price?.effectiveUnitPrice ?? null, referencePrice),
       stock: supply.stockScore,
       lifecycle: supply.lifecycleScore,
-      dataQuality: scoreDataQuality(evaluation.flags),
+      dataQuality: scoreDataQuality(evaluation.dataQuality.score, evaluation.flags),
     };
     return {
       part: entry.part,
@@ -121,5 +150,6 @@ export function rankParts<P extends PartSpec>(
   });
   ranked.sort(compareRankedParts);
   failing.sort((a, b) => compareParts(a.part, b.part));
-  return { catalogueVersion: options.catalogueVersion, weights, orderQuantity: sheet.orderQuantity, ranked, failing };
+  excluded.sort((a, b) => compareParts(a.part, b.part));
+  return { catalogueVersion: options.catalogueVersion, weights, orderQuantity: sheet.orderQuantity, ranked, failing, excluded };
 }

@@ -103,10 +103,11 @@ describe("score components", () => {
     expect(LIFECYCLE_SCORES.obsolete).toBe(0);
   });
 
-  it("takes a quarter of data quality per distinct data flag", () => {
-    expect(scoreDataQuality([])).toBe(1);
-    expect(scoreDataQuality(["no-min-gain", "gain-off-point", "no-min-gain"])).toBe(0.5);
-    expect(scoreDataQuality(["hot-junction"])).toBe(1);
+  it("takes the record's completeness, less a quarter when the gain is quoted far from the operating point", () => {
+    expect(scoreDataQuality(1, [])).toBe(1);
+    expect(scoreDataQuality(0.75, ["no-min-gain", "gain-off-point"])).toBe(0.5);
+    expect(scoreDataQuality(1, ["hot-junction"])).toBe(1);
+    expect(scoreDataQuality(0, ["gain-off-point"])).toBe(0);
   });
 });
 

@@ -59,10 +59,9 @@ export const LIFECYCLE_SCORES: Readonly<Record<Lifecycle, number>> = {
   obsolete: 0,
 };
 
-/** Flags that say the data, not the circuit, is in doubt; each costs a quarter of the data-quality score. */
-export const DATA_QUALITY_FLAGS: readonly FlagName[] = ["gain-off-point", "no-min-gain", "early-unknown", "stale-datasheet"];
+/** What an operating current far from the quoted gain points costs the data-quality score. */
+export const GAIN_OFF_POINT_PENALTY = 0.25;
 
-const DATA_FLAG_PENALTY = 0.25;
 
 function roundUpToMultiple(quantity: number, multiple: number): number {
   const step = multiple >= 1 ? Math.floor(multiple) : 1;
@@ -149,13 +148,12 @@ export function scoreStock(stock: number | null, quantity: number): number {
   return clampUnit(stock / Math.max(1, quantity));
 }
 
-/** Data quality on 0..1 from the distinct data flags raised. */
-export function scoreDataQuality(flags: readonly FlagName[]): number {
-  let penalties = 0;
-  for (const flag of DATA_QUALITY_FLAGS) {
-    if (flags.includes(flag)) penalties += 1;
-  }
-  return clampUnit(1 - DATA_FLAG_PENALTY * penalties);
+/**
+ * Data quality on 0..1: the record's own completeness (assessDataQuality's score) less a
+ * quarter when the circuit runs the part far from its quoted gain points.
+ */
+export function scoreDataQuality(recordScore: number, flags: readonly FlagName[]): number {
+  return clampUnit(recordScore - (flags.includes("gain-off-point") ? GAIN_OFF_POINT_PENALTY : 0));
 }
 
 /** Rejects weights that cannot make a score: negative, not finite, or all zero. */

@@ -1,8 +1,10 @@
 import { redirect } from "react-router";
 import { Authenticator } from "remix-auth";
 import { TOTPStrategy } from "remix-auth-totp";
+import { countFailures, recordFailure } from "#app/data/sign-in-failures.server.ts";
 import { findPersonByEmail, findPersonById, recordSignIn, type Person } from "#app/data/users.server.ts";
 import { cookieIsSecure, env } from "./env.server.ts";
+import { readFormData } from "./forms.ts";
 import { sendMail } from "./mail.server.ts";
 import { hasRole, type Role } from "./roles.ts";
 import { getSession, sessionStorage } from "./session.server.ts";
@@ -63,10 +65,40 @@ function createAuthenticator() {
 
 let authenticator: Authenticator<Person> | undefined;
 
-/** Runs the e-mailed-code strategy; it always answers by throwing a redirect. */
+/** The strategy's own cookie, written the way it writes it, to end a challenge with a message. */
+function endedChallengeCookie(email: string | null, error: string): string {
+  const params = new URLSearchParams();
+  if (email) params.set("email", email);
+  params.set("error", error);
+  return [`_totp=${params.toString()}`, "Path=/", "Max-Age=300", ...(cookieIsSecure() ? ["Secure"] : []), "HttpOnly", "SameSite=Lax"].join("; ");
+}
+
+function errorIn(response: Response): string | null {
+  const cookie = response.headers.getSetCookie().find((c) => c.startsWith("_totp="));
+  return cookie ? parseCodeCookie(cookie.slice("_totp=".length).split(";")[0]!).error : null;
+}
+
+/**
+ * Runs the e-mailed-code strategy; it always answers by throwing a redirect.
+ * Wrong codes are counted here, on the server: the strategy itself only limits bad links.
+ */
 export async function authenticateWithCode(request: Request): Promise<never> {
   authenticator ??= createAuthenticator();
-  await authenticator.authenticate("totp", request);
+  const state = readCodeState(request);
+  const typedCode = request.method === "POST" && Boolean((await readFormData(request))?.get("code"));
+  const challenge = typedCode ? state.challenge : null;
+  const lockedOut = () =>
+    redirect(VERIFY_PATH, { headers: { "Set-Cookie": endedChallengeCookie(state.email, SIGN_IN_ERRORS.rateLimitExceeded) } });
+  if (typedCode && !challenge && state.error === SIGN_IN_ERRORS.rateLimitExceeded) throw lockedOut();
+  if (challenge && (await countFailures(challenge)) >= env().TOTP_MAX_ATTEMPTS) throw lockedOut();
+  try {
+    await authenticator.authenticate("totp", request);
+  } catch (thrown) {
+    if (challenge && thrown instanceof Response && errorIn(thrown) === SIGN_IN_ERRORS.invalidTotp) {
+      if ((await recordFailure(challenge)) >= env().TOTP_MAX_ATTEMPTS) throw lockedOut();
+    }
+    throw thrown;
+  }
   throw redirect(VERIFY_PATH);
 }
 
@@ -108,19 +140,34 @@ export async function signOutRedirect(request: Request): Promise<Response> {
   return redirect(SIGN_IN_PATH, { headers: { "Set-Cookie": await sessionStorage().destroySession(session) } });
 }
 
+interface CodeState {
+  email: string | null;
+  hasCode: boolean;
+  /** The encrypted challenge of the code in flight: the key for counting wrong codes. */
+  challenge: string | null;
+  error: string | null;
+}
+
+function parseCodeCookie(raw: string): CodeState {
+  const params = new URLSearchParams(raw.replace(/^"|"$/g, ""));
+  let challenge: string | null = null;
+  const totp = params.get("totp");
+  if (totp) {
+    try {
+      const parsed = JSON.parse(totp) as { jwe?: unknown };
+      challenge = typeof parsed.jwe === "string" ? parsed.jwe : null;
+    } catch {
+      challenge = null;
+    }
+  }
+  return { email: params.get("email"), hasCode: challenge !== null, challenge, error: params.get("error") };
+}
+
 /** What the e-mailed-code strategy keeps in its own cookie between the two steps. */
-export function readCodeState(request: Request): { email: string | null; hasCode: boolean; error: string | null } {
-  const header = request.headers.get("Cookie") ?? "";
-  const raw = header
+export function readCodeState(request: Request): CodeState {
+  const raw = (request.headers.get("Cookie") ?? "")
     .split(/;\s*/)
     .find((part) => part.startsWith("_totp="))
     ?.slice("_totp=".length);
-  if (!raw) return { email: null, hasCode: false, error: null };
-  let params: URLSearchParams;
-  try {
-    params = new URLSearchParams(decodeURIComponent(raw));
-  } catch {
-    return { email: null, hasCode: false, error: null };
-  }
-  return { email: params.get("email"), hasCode: params.has("totp"), error: params.get("error") };
+  return raw ? parseCodeCookie(raw) : { email: null, hasCode: false, challenge: null, error: null };
 }

@@ -11,12 +11,12 @@ import type {
 export type PartThermals = Pick<PartSpec, "ptotWatts" | "ptotReference" | "tjMaxC" | "rthJaCPerW" | "rthJcCPerW">;
 
 /** Ptot quoted with the ambient at 25 °C, as small-signal datasheets do. */
-export function ratedAtAmbient(ptotWatts: number, tjMaxC: number, rthJaCPerW: number): PartThermals {
+export function rateAtAmbient(ptotWatts: number, tjMaxC: number, rthJaCPerW: number): PartThermals {
   return { ptotWatts, ptotReference: "ambient", tjMaxC, rthJaCPerW, rthJcCPerW: null };
 }
 
 /** Ptot quoted with the case held at 25 °C, as power datasheets do; Rth(j-a) is the free-air figure. */
-export function ratedAtCase(
+export function rateAtCase(
   ptotWatts: number,
   tjMaxC: number,
   rthJcCPerW: number,
@@ -31,7 +31,7 @@ export interface HfeValues {
   max?: number;
 }
 
-export function gainAt(icAmps: number, vceVolts: number | null, hfe: HfeValues, tempC: number | null = 25): GainPoint {
+export function quoteGain(icAmps: number, vceVolts: number | null, hfe: HfeValues, tempC: number | null = 25): GainPoint {
   return {
     icAmps,
     vceVolts,
@@ -47,7 +47,7 @@ export interface VceSatValues {
   typ?: number;
 }
 
-export function saturationAt(
+export function quoteSaturation(
   icAmps: number,
   ibAmps: number | null,
   vceSat: VceSatValues,

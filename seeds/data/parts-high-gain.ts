@@ -1,15 +1,15 @@
 // Invented high-gain, low-noise small-signal parts and the dual (two-die) packages built from them.
 import type { PartSpec } from "#app/domain/part.ts";
 import { MAELBROOK, OSTREVIK, TARNWELL } from "./manufacturers.ts";
-import { definePart, deriveVariant, gainAt, ratedAtAmbient, saturationAt } from "./part-builders.ts";
+import { definePart, deriveVariant, quoteGain, rateAtAmbient, quoteSaturation } from "./part-builders.ts";
 
-const TO92 = ratedAtAmbient(0.625, 150, 200);
-const TO92_HALF_WATT = ratedAtAmbient(0.5, 150, 250);
-const SOT23 = ratedAtAmbient(0.35, 150, 357);
-const SOT23_SMALL_PAD = ratedAtAmbient(0.25, 150, 500);
+const TO92 = rateAtAmbient(0.625, 150, 200);
+const TO92_HALF_WATT = rateAtAmbient(0.5, 150, 250);
+const SOT23 = rateAtAmbient(0.35, 150, 357);
+const SOT23_SMALL_PAD = rateAtAmbient(0.25, 150, 500);
 // Both dies together; SOT-363 and SO-8 datasheets quote the package total.
-const SOT363_DUAL = ratedAtAmbient(0.2, 150, 625);
-const SO8_DUAL = ratedAtAmbient(0.625, 150, 200);
+const SOT363_DUAL = rateAtAmbient(0.2, 150, 625);
+const SO8_DUAL = rateAtAmbient(0.625, 150, 200);
 
 const osk4401n = definePart({
   manufacturer: OSTREVIK,
@@ -22,13 +22,13 @@ const osk4401n = definePart({
   icMaxAmps: 0.1,
   thermals: TO92_HALF_WATT,
   gainPoints: [
-    gainAt(10e-6, 5, { min: 250, typ: 400 }),
-    gainAt(100e-6, 5, { min: 350, typ: 500 }),
-    gainAt(2e-3, 5, { min: 420, typ: 600, max: 800 }),
+    quoteGain(10e-6, 5, { min: 250, typ: 400 }),
+    quoteGain(100e-6, 5, { min: 350, typ: 500 }),
+    quoteGain(2e-3, 5, { min: 420, typ: 600, max: 800 }),
   ],
   saturationPoints: [
-    saturationAt(10e-3, 0.5e-3, { max: 0.2, typ: 0.08 }, 0.7),
-    saturationAt(100e-3, 5e-3, { max: 0.55, typ: 0.2 }, 0.9),
+    quoteSaturation(10e-3, 0.5e-3, { max: 0.2, typ: 0.08 }, 0.7),
+    quoteSaturation(100e-3, 5e-3, { max: 0.55, typ: 0.2 }, 0.9),
   ],
   vbeOnVolts: 0.62,
   ftHz: 200e6,
@@ -42,13 +42,13 @@ const osk4401p = deriveVariant(osk4401n, {
   polarity: "pnp",
   veboVolts: 5,
   gainPoints: [
-    gainAt(10e-6, 5, { min: 220, typ: 350 }),
-    gainAt(100e-6, 5, { min: 300, typ: 450 }),
-    gainAt(2e-3, 5, { min: 420, typ: 560, max: 800 }),
+    quoteGain(10e-6, 5, { min: 220, typ: 350 }),
+    quoteGain(100e-6, 5, { min: 300, typ: 450 }),
+    quoteGain(2e-3, 5, { min: 420, typ: 560, max: 800 }),
   ],
   saturationPoints: [
-    saturationAt(10e-3, 0.5e-3, { max: 0.25, typ: 0.1 }, 0.72),
-    saturationAt(100e-3, 5e-3, { max: 0.6, typ: 0.25 }, 0.95),
+    quoteSaturation(10e-3, 0.5e-3, { max: 0.25, typ: 0.1 }, 0.72),
+    quoteSaturation(100e-3, 5e-3, { max: 0.6, typ: 0.25 }, 0.95),
   ],
   vbeOnVolts: 0.64,
   ftHz: 150e6,
@@ -67,8 +67,8 @@ const osk4480n = definePart({
   veboVolts: 6,
   icMaxAmps: 0.05,
   thermals: TO92_HALF_WATT,
-  gainPoints: [gainAt(10e-6, 5, { typ: 750 }), gainAt(2e-3, 5, { typ: 1100 })],
-  saturationPoints: [saturationAt(10e-3, 0.5e-3, { max: 0.25, typ: 0.1 }, 0.72)],
+  gainPoints: [quoteGain(10e-6, 5, { typ: 750 }), quoteGain(2e-3, 5, { typ: 1100 })],
+  saturationPoints: [quoteSaturation(10e-3, 0.5e-3, { max: 0.25, typ: 0.1 }, 0.72)],
   vbeOnVolts: 0.6,
   ftHz: 150e6,
   cobFarads: 2e-12,
@@ -86,8 +86,8 @@ const mlb449t = definePart({
   veboVolts: 5,
   icMaxAmps: 0.1,
   thermals: TO92_HALF_WATT,
-  gainPoints: [gainAt(10e-6, 5, { min: 200, typ: 320 }), gainAt(2e-3, 5, { min: 420, typ: 520, max: 800 })],
-  saturationPoints: [saturationAt(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7)],
+  gainPoints: [quoteGain(10e-6, 5, { min: 200, typ: 320 }), quoteGain(2e-3, 5, { min: 420, typ: 520, max: 800 })],
+  saturationPoints: [quoteSaturation(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7)],
   vbeOnVolts: 0.64,
   ftHz: 250e6,
   cobFarads: 2.5e-12,
@@ -98,8 +98,8 @@ const mlb449t = definePart({
 const mlb549t = deriveVariant(mlb449t, {
   partNumber: "MLB549T",
   polarity: "pnp",
-  gainPoints: [gainAt(10e-6, 5, { min: 180, typ: 300 }), gainAt(2e-3, 5, { min: 420, typ: 500, max: 800 })],
-  saturationPoints: [saturationAt(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72)],
+  gainPoints: [quoteGain(10e-6, 5, { min: 180, typ: 300 }), quoteGain(2e-3, 5, { min: 420, typ: 500, max: 800 })],
+  saturationPoints: [quoteSaturation(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72)],
   ftHz: 180e6,
   cobFarads: 4e-12,
   earlyVolts: 40,
@@ -115,8 +115,8 @@ const twK2210 = definePart({
   veboVolts: 5,
   icMaxAmps: 0.2,
   thermals: TO92,
-  gainPoints: [gainAt(1e-3, 5, { min: 400, typ: 600, max: 1000 }), gainAt(50e-3, 5, { min: 250, typ: 450 })],
-  saturationPoints: [saturationAt(50e-3, 2.5e-3, { max: 0.3, typ: 0.1 }, 0.8)],
+  gainPoints: [quoteGain(1e-3, 5, { min: 400, typ: 600, max: 1000 }), quoteGain(50e-3, 5, { min: 250, typ: 450 })],
+  saturationPoints: [quoteSaturation(50e-3, 2.5e-3, { max: 0.3, typ: 0.1 }, 0.8)],
   vbeOnVolts: 0.63,
   ftHz: 180e6,
   cobFarads: 3e-12,
@@ -127,8 +127,8 @@ const twK2210 = definePart({
 const twK2210c = deriveVariant(twK2210, {
   partNumber: "TW-K2210C",
   polarity: "pnp",
-  gainPoints: [gainAt(1e-3, 5, { min: 400, typ: 550, max: 1000 }), gainAt(50e-3, 5, { min: 200, typ: 380 })],
-  saturationPoints: [saturationAt(50e-3, 2.5e-3, { max: 0.35, typ: 0.14 }, 0.82)],
+  gainPoints: [quoteGain(1e-3, 5, { min: 400, typ: 550, max: 1000 }), quoteGain(50e-3, 5, { min: 200, typ: 380 })],
+  saturationPoints: [quoteSaturation(50e-3, 2.5e-3, { max: 0.35, typ: 0.14 }, 0.82)],
   ftHz: 150e6,
   cobFarads: 5.5e-12,
   earlyVolts: 40,
@@ -144,8 +144,8 @@ const twK2260 = definePart({
   veboVolts: 5,
   icMaxAmps: 0.1,
   thermals: SOT23_SMALL_PAD,
-  gainPoints: [gainAt(1e-3, 5, { min: 250, typ: 380, max: 600 })],
-  saturationPoints: [saturationAt(10e-3, 0.5e-3, { max: 0.25, typ: 0.08 }, 0.7)],
+  gainPoints: [quoteGain(1e-3, 5, { min: 250, typ: 380, max: 600 })],
+  saturationPoints: [quoteSaturation(10e-3, 0.5e-3, { max: 0.25, typ: 0.08 }, 0.7)],
   vbeOnVolts: 0.63,
   ftHz: 220e6,
   cobFarads: 2e-12,
@@ -163,7 +163,7 @@ const twK2280 = definePart({
   veboVolts: 4,
   icMaxAmps: 0.05,
   thermals: SOT23_SMALL_PAD,
-  gainPoints: [gainAt(1e-3, 5, { min: 300, typ: 450 }), gainAt(10e-3, 5, { min: 250, typ: 400 })],
+  gainPoints: [quoteGain(1e-3, 5, { min: 300, typ: 450 }), quoteGain(10e-3, 5, { min: 250, typ: 400 })],
   saturationPoints: [],
   vbeOnVolts: 0.7,
   ftHz: 300e6,
@@ -183,8 +183,8 @@ const mlb481m = definePart({
   veboVolts: 6,
   icMaxAmps: 0.1,
   thermals: SOT363_DUAL,
-  gainPoints: [gainAt(2e-3, 5, { min: 200, typ: 290, max: 450 })],
-  saturationPoints: [saturationAt(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7)],
+  gainPoints: [quoteGain(2e-3, 5, { min: 200, typ: 290, max: 450 })],
+  saturationPoints: [quoteSaturation(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7)],
   vbeOnVolts: 0.65,
   ftHz: 250e6,
   cobFarads: 3e-12,
@@ -196,8 +196,8 @@ const mlb581m = deriveVariant(mlb481m, {
   partNumber: "MLB581M",
   polarity: "pnp",
   veboVolts: 5,
-  gainPoints: [gainAt(2e-3, 5, { min: 200, typ: 250, max: 450 })],
-  saturationPoints: [saturationAt(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72)],
+  gainPoints: [quoteGain(2e-3, 5, { min: 200, typ: 250, max: 450 })],
+  saturationPoints: [quoteSaturation(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72)],
   ftHz: 150e6,
   cobFarads: 4.5e-12,
   earlyVolts: 50,

@@ -1,12 +1,12 @@
 // Invented general-purpose small-signal parts in TO-92 and SOT-23.
 import type { PartSpec } from "#app/domain/part.ts";
 import { MAELBROOK, OSTREVIK, TARNWELL } from "./manufacturers.ts";
-import { definePart, deriveVariant, gainAt, ratedAtAmbient, saturationAt } from "./part-builders.ts";
+import { definePart, deriveVariant, quoteGain, rateAtAmbient, quoteSaturation } from "./part-builders.ts";
 
-const TO92 = ratedAtAmbient(0.625, 150, 200);
-const TO92_HALF_WATT = ratedAtAmbient(0.5, 150, 250);
-const SOT23 = ratedAtAmbient(0.35, 150, 357);
-const SOT23_SMALL_PAD = ratedAtAmbient(0.25, 150, 500);
+const TO92 = rateAtAmbient(0.625, 150, 200);
+const TO92_HALF_WATT = rateAtAmbient(0.5, 150, 250);
+const SOT23 = rateAtAmbient(0.35, 150, 357);
+const SOT23_SMALL_PAD = rateAtAmbient(0.25, 150, 500);
 
 const osk2210n = definePart({
   manufacturer: OSTREVIK,
@@ -19,13 +19,13 @@ const osk2210n = definePart({
   icMaxAmps: 0.6,
   thermals: TO92,
   gainPoints: [
-    gainAt(1e-3, 1, { min: 70, typ: 150 }),
-    gainAt(10e-3, 1, { min: 100, typ: 200, max: 300 }),
-    gainAt(150e-3, 1, { min: 60, typ: 120 }),
+    quoteGain(1e-3, 1, { min: 70, typ: 150 }),
+    quoteGain(10e-3, 1, { min: 100, typ: 200, max: 300 }),
+    quoteGain(150e-3, 1, { min: 60, typ: 120 }),
   ],
   saturationPoints: [
-    saturationAt(150e-3, 15e-3, { max: 0.3, typ: 0.15 }, 0.9),
-    saturationAt(500e-3, 50e-3, { max: 0.75, typ: 0.35 }, 1.15),
+    quoteSaturation(150e-3, 15e-3, { max: 0.3, typ: 0.15 }, 0.9),
+    quoteSaturation(500e-3, 50e-3, { max: 0.75, typ: 0.35 }, 1.15),
   ],
   vbeOnVolts: 0.68,
   ftHz: 250e6,
@@ -40,13 +40,13 @@ const osk2210p = deriveVariant(osk2210n, {
   vcboVolts: 50,
   veboVolts: 5,
   gainPoints: [
-    gainAt(1e-3, 1, { min: 60, typ: 140 }),
-    gainAt(10e-3, 1, { min: 100, typ: 180, max: 300 }),
-    gainAt(150e-3, 1, { min: 50, typ: 100 }),
+    quoteGain(1e-3, 1, { min: 60, typ: 140 }),
+    quoteGain(10e-3, 1, { min: 100, typ: 180, max: 300 }),
+    quoteGain(150e-3, 1, { min: 50, typ: 100 }),
   ],
   saturationPoints: [
-    saturationAt(150e-3, 15e-3, { max: 0.4, typ: 0.2 }, 0.95),
-    saturationAt(500e-3, 50e-3, { max: 0.8, typ: 0.45 }, 1.25),
+    quoteSaturation(150e-3, 15e-3, { max: 0.4, typ: 0.2 }, 0.95),
+    quoteSaturation(500e-3, 50e-3, { max: 0.8, typ: 0.45 }, 1.25),
   ],
   vbeOnVolts: 0.7,
   ftHz: 200e6,
@@ -65,13 +65,13 @@ const osk3050n = definePart({
   icMaxAmps: 0.1,
   thermals: TO92_HALF_WATT,
   gainPoints: [
-    gainAt(10e-6, 5, { typ: 90 }),
-    gainAt(2e-3, 5, { min: 110, typ: 200, max: 450 }),
-    gainAt(100e-3, 5, { min: 60, typ: 120 }),
+    quoteGain(10e-6, 5, { typ: 90 }),
+    quoteGain(2e-3, 5, { min: 110, typ: 200, max: 450 }),
+    quoteGain(100e-3, 5, { min: 60, typ: 120 }),
   ],
   saturationPoints: [
-    saturationAt(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7),
-    saturationAt(100e-3, 5e-3, { max: 0.6, typ: 0.2 }, 0.9),
+    quoteSaturation(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7),
+    quoteSaturation(100e-3, 5e-3, { max: 0.6, typ: 0.2 }, 0.9),
   ],
   vbeOnVolts: 0.66,
   ftHz: 300e6,
@@ -85,13 +85,13 @@ const osk3050p = deriveVariant(osk3050n, {
   polarity: "pnp",
   veboVolts: 5,
   gainPoints: [
-    gainAt(10e-6, 5, { typ: 75 }),
-    gainAt(2e-3, 5, { min: 110, typ: 190, max: 450 }),
-    gainAt(100e-3, 5, { min: 50, typ: 100 }),
+    quoteGain(10e-6, 5, { typ: 75 }),
+    quoteGain(2e-3, 5, { min: 110, typ: 190, max: 450 }),
+    quoteGain(100e-3, 5, { min: 50, typ: 100 }),
   ],
   saturationPoints: [
-    saturationAt(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72),
-    saturationAt(100e-3, 5e-3, { max: 0.65, typ: 0.25 }, 0.95),
+    quoteSaturation(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72),
+    quoteSaturation(100e-3, 5e-3, { max: 0.65, typ: 0.25 }, 0.95),
   ],
   vbeOnVolts: 0.68,
   ftHz: 150e6,
@@ -110,8 +110,8 @@ const osk1102n = definePart({
   veboVolts: 5,
   icMaxAmps: 0.2,
   thermals: TO92,
-  gainPoints: [gainAt(100e-6, 5, { min: 60, typ: 140, max: 300 }, null)],
-  saturationPoints: [saturationAt(10e-3, 1e-3, { max: 0.2, typ: 0.07 }, 0.75)],
+  gainPoints: [quoteGain(100e-6, 5, { min: 60, typ: 140, max: 300 }, null)],
+  saturationPoints: [quoteSaturation(10e-3, 1e-3, { max: 0.2, typ: 0.07 }, 0.75)],
   vbeOnVolts: 0.64,
   ftHz: 300e6,
   cobFarads: 2.5e-12,
@@ -130,7 +130,7 @@ const osk1105p = definePart({
   veboVolts: 5,
   icMaxAmps: 0.2,
   thermals: SOT23,
-  gainPoints: [gainAt(100e-6, 5, { typ: 150 }, null)],
+  gainPoints: [quoteGain(100e-6, 5, { typ: 150 }, null)],
   saturationPoints: [],
   vbeOnVolts: 0.66,
   ftHz: 180e6,
@@ -150,10 +150,10 @@ const mlb481t = definePart({
   veboVolts: 6,
   icMaxAmps: 0.1,
   thermals: TO92_HALF_WATT,
-  gainPoints: [gainAt(10e-6, 5, { typ: 150 }), gainAt(2e-3, 5, { min: 200, typ: 290, max: 450 })],
+  gainPoints: [quoteGain(10e-6, 5, { typ: 150 }), quoteGain(2e-3, 5, { min: 200, typ: 290, max: 450 })],
   saturationPoints: [
-    saturationAt(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7),
-    saturationAt(100e-3, 5e-3, { max: 0.6, typ: 0.2 }, 0.9),
+    quoteSaturation(10e-3, 0.5e-3, { max: 0.25, typ: 0.09 }, 0.7),
+    quoteSaturation(100e-3, 5e-3, { max: 0.6, typ: 0.2 }, 0.9),
   ],
   vbeOnVolts: 0.65,
   ftHz: 250e6,
@@ -166,10 +166,10 @@ const mlb581t = deriveVariant(mlb481t, {
   partNumber: "MLB581T",
   polarity: "pnp",
   veboVolts: 5,
-  gainPoints: [gainAt(10e-6, 5, { typ: 140 }), gainAt(2e-3, 5, { min: 200, typ: 250, max: 450 })],
+  gainPoints: [quoteGain(10e-6, 5, { typ: 140 }), quoteGain(2e-3, 5, { min: 200, typ: 250, max: 450 })],
   saturationPoints: [
-    saturationAt(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72),
-    saturationAt(100e-3, 5e-3, { max: 0.65, typ: 0.25 }, 0.95),
+    quoteSaturation(10e-3, 0.5e-3, { max: 0.3, typ: 0.1 }, 0.72),
+    quoteSaturation(100e-3, 5e-3, { max: 0.65, typ: 0.25 }, 0.95),
   ],
   vbeOnVolts: 0.66,
   ftHz: 150e6,
@@ -188,11 +188,11 @@ const mlb430s = definePart({
   icMaxAmps: 0.5,
   thermals: SOT23,
   gainPoints: [
-    gainAt(1e-3, 10, { min: 25, typ: 60 }),
-    gainAt(10e-3, 10, { min: 40, typ: 90 }),
-    gainAt(30e-3, 10, { min: 40, typ: 85, max: 200 }),
+    quoteGain(1e-3, 10, { min: 25, typ: 60 }),
+    quoteGain(10e-3, 10, { min: 40, typ: 90 }),
+    quoteGain(30e-3, 10, { min: 40, typ: 85, max: 200 }),
   ],
-  saturationPoints: [saturationAt(20e-3, 2e-3, { max: 0.5, typ: 0.15 }, 0.9)],
+  saturationPoints: [quoteSaturation(20e-3, 2e-3, { max: 0.5, typ: 0.15 }, 0.9)],
   vbeOnVolts: 0.7,
   ftHz: 50e6,
   cobFarads: 6e-12,
@@ -205,11 +205,11 @@ const mlb530s = deriveVariant(mlb430s, {
   polarity: "pnp",
   veboVolts: 5,
   gainPoints: [
-    gainAt(1e-3, 10, { min: 25, typ: 55 }),
-    gainAt(10e-3, 10, { min: 40, typ: 80 }),
-    gainAt(30e-3, 10, { min: 40, typ: 75, max: 200 }),
+    quoteGain(1e-3, 10, { min: 25, typ: 55 }),
+    quoteGain(10e-3, 10, { min: 40, typ: 80 }),
+    quoteGain(30e-3, 10, { min: 40, typ: 75, max: 200 }),
   ],
-  saturationPoints: [saturationAt(20e-3, 2e-3, { max: 0.5, typ: 0.2 }, 0.9)],
+  saturationPoints: [quoteSaturation(20e-3, 2e-3, { max: 0.5, typ: 0.2 }, 0.9)],
   cobFarads: 8e-12,
 });
 
@@ -223,10 +223,10 @@ const mlb412t = definePart({
   veboVolts: 4.5,
   icMaxAmps: 0.2,
   thermals: TO92,
-  gainPoints: [gainAt(10e-3, 1, { min: 40, typ: 90, max: 120 }), gainAt(100e-3, 1, { min: 20, typ: 50 })],
+  gainPoints: [quoteGain(10e-3, 1, { min: 40, typ: 90, max: 120 }), quoteGain(100e-3, 1, { min: 20, typ: 50 })],
   saturationPoints: [
-    saturationAt(10e-3, 1e-3, { max: 0.25, typ: 0.1 }, 0.85),
-    saturationAt(50e-3, 5e-3, { max: 0.5, typ: 0.2 }, 1.0),
+    quoteSaturation(10e-3, 1e-3, { max: 0.25, typ: 0.1 }, 0.85),
+    quoteSaturation(50e-3, 5e-3, { max: 0.5, typ: 0.2 }, 1.0),
   ],
   vbeOnVolts: 0.72,
   ftHz: 300e6,
@@ -247,14 +247,14 @@ const mlb418s = definePart({
   icMaxAmps: 1,
   thermals: SOT23,
   gainPoints: [
-    gainAt(10e-3, 2, { min: 200, typ: 350 }),
-    gainAt(500e-3, 2, { min: 150, typ: 280 }),
-    gainAt(1, 2, { min: 100, typ: 200 }),
+    quoteGain(10e-3, 2, { min: 200, typ: 350 }),
+    quoteGain(500e-3, 2, { min: 150, typ: 280 }),
+    quoteGain(1, 2, { min: 100, typ: 200 }),
   ],
   saturationPoints: [
-    saturationAt(100e-3, 1e-3, { max: 0.06, typ: 0.03 }, 0.75),
-    saturationAt(500e-3, 10e-3, { max: 0.15, typ: 0.08 }, 0.85),
-    saturationAt(1, 50e-3, { max: 0.25, typ: 0.15 }, 0.95),
+    quoteSaturation(100e-3, 1e-3, { max: 0.06, typ: 0.03 }, 0.75),
+    quoteSaturation(500e-3, 10e-3, { max: 0.15, typ: 0.08 }, 0.85),
+    quoteSaturation(1, 50e-3, { max: 0.25, typ: 0.15 }, 0.95),
   ],
   vbeOnVolts: 0.75,
   ftHz: 150e6,
@@ -274,8 +274,8 @@ const mlb460t = definePart({
   veboVolts: 6,
   icMaxAmps: 0.5,
   thermals: TO92,
-  gainPoints: [gainAt(10e-3, 5, { typ: 180 }), gainAt(150e-3, 5, { typ: 140 })],
-  saturationPoints: [saturationAt(150e-3, 15e-3, { max: 0.3, typ: 0.12 }, 0.9)],
+  gainPoints: [quoteGain(10e-3, 5, { typ: 180 }), quoteGain(150e-3, 5, { typ: 140 })],
+  saturationPoints: [quoteSaturation(150e-3, 15e-3, { max: 0.3, typ: 0.12 }, 0.9)],
   vbeOnVolts: 0.7,
   ftHz: 200e6,
   cobFarads: 5e-12,
@@ -288,8 +288,8 @@ const mlb560t = deriveVariant(mlb460t, {
   partNumber: "MLB560T",
   polarity: "pnp",
   veboVolts: 5,
-  gainPoints: [gainAt(10e-3, 5, { typ: 170 }), gainAt(150e-3, 5, { typ: 120 })],
-  saturationPoints: [saturationAt(150e-3, 15e-3, { max: 0.4, typ: 0.18 }, 0.95)],
+  gainPoints: [quoteGain(10e-3, 5, { typ: 170 }), quoteGain(150e-3, 5, { typ: 120 })],
+  saturationPoints: [quoteSaturation(150e-3, 15e-3, { max: 0.4, typ: 0.18 }, 0.95)],
   ftHz: 150e6,
   cobFarads: 8e-12,
   earlyVolts: 70,
@@ -305,8 +305,8 @@ const twK1120 = definePart({
   veboVolts: 5,
   icMaxAmps: 0.15,
   thermals: TO92,
-  gainPoints: [gainAt(2e-3, 6, { min: 120, max: 400 })],
-  saturationPoints: [saturationAt(100e-3, 10e-3, { max: 0.25 }, 0.95)],
+  gainPoints: [quoteGain(2e-3, 6, { min: 120, max: 400 })],
+  saturationPoints: [quoteSaturation(100e-3, 10e-3, { max: 0.25 }, 0.95)],
   vbeOnVolts: 0.64,
   ftHz: 180e6,
   cobFarads: 3.5e-12,
@@ -317,7 +317,7 @@ const twK1120 = definePart({
 const twK1120c = deriveVariant(twK1120, {
   partNumber: "TW-K1120C",
   polarity: "pnp",
-  saturationPoints: [saturationAt(100e-3, 10e-3, { max: 0.3 }, 1.0)],
+  saturationPoints: [quoteSaturation(100e-3, 10e-3, { max: 0.3 }, 1.0)],
   ftHz: 150e6,
   cobFarads: 5e-12,
   earlyVolts: 55,

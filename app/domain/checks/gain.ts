@@ -35,7 +35,7 @@ export function checkGain(input: GainCheckInput): CheckResult {
     return result(input, "fails", null, flags, inputs, "No gain is quoted, so the part cannot be checked for gain.");
   }
   if (input.requiredHfe == null) {
-    return result(input, "fits", null, flags, inputs, `Worst-case hFE is ${formatValue(hfe, "")} ${at} (${lowest.estimate.note}); the sheet asks for no gain.`);
+    return result(input, "fits", null, flags, inputs, `Worst-case hFE ${formatValue(hfe, "")} ${at} (${lowest.estimate.note}); the sheet asks for no gain.`);
   }
   const margin = (hfe - input.requiredHfe) / hfe;
   const offPoint = flags.includes("gain-off-point");

@@ -1,0 +1,182 @@
+// From uploaded bytes to records and a header mapped onto a format's columns, with file-level problems.
+import Papa from "papaparse";
+import { checkHeaderUnit, makeCellReader, type CellReader } from "./cells";
+import { groupColumnName, type ColumnGroupSpec, type ColumnSpec, type IntakeFormat } from "./columns";
+import { decodeIntakeBytes } from "./decode";
+import { cellProblem, fileProblem, type IntakeKind, type IntakeProblem } from "./problems";
+
+export const DELIMITERS = [",", ";", "\t", "|"] as const;
+export type Delimiter = (typeof DELIMITERS)[number];
+
+export interface MappedColumn {
+  /** Position in each record. */
+  index: number;
+  /** Normalised name, e.g. `ic_max` or `gain2_hfe_min`. */
+  name: string;
+  spec: ColumnSpec;
+  group: ColumnGroupSpec | null;
+  /** N of `gainN_*`; 0 for ordinary columns. */
+  pointNumber: number;
+  read: CellReader;
+}
+
+export interface Table {
+  /** False when a file-level or header error refuses the whole file. */
+  ok: boolean;
+  delimiter: Delimiter;
+  headerWidth: number;
+  columns: MappedColumn[];
+  /** Every record after the header, with its spreadsheet row number; blank records are left out. */
+  records: Array<{ row: number; cells: string[] }>;
+  problems: IntakeProblem[];
+}
+
+const GROUP_NAME_PATTERN = /^([a-z]+)(\d+)_(.+)$/;
+const HEADER_UNIT_PATTERN = /^(.*?)\s*\[([^\]]*)\]$/;
+const QUOTE_MESSAGES: Readonly<Record<string, string>> = {
+  MissingQuotes: "a quoted cell starting on this row is never closed, so the rest of the file ran into it: a closing double quote is missing",
+  InvalidQuotes: "a double quote inside a quoted cell must be doubled (\"\")",
+};
+
+/** Decodes, splits and maps a file onto a format; rows are not validated here. */
+export function readTable(bytes: Uint8Array, format: IntakeFormat): Table {
+  const refused = (problems: IntakeProblem[]): Table => ({ ok: false, delimiter: ",", headerWidth: 0, columns: [], records: [], problems });
+  const decoded = decodeIntakeBytes(bytes);
+  if (!decoded.ok) return refused([decoded.problem]);
+
+  const delimiter = sniffDelimiter(decoded.text);
+  const parsed = Papa.parse<string[]>(decoded.text, { delimiter, header: false, skipEmptyLines: false, quoteChar: '"' });
+  const [headerCells = [], ...body] = parsed.data;
+  const problems: IntakeProblem[] = [];
+  const header = mapHeader(headerCells, format, delimiter !== ",", problems);
+  if (header.fatal) return refused(problems);
+
+  const records: Table["records"] = [];
+  body.forEach((cells, i) => {
+    if (!cells.every((cell) => cell.trim() === "")) records.push({ row: i + 2, cells });
+  });
+  if (records.length === 0) return refused([...problems, fileProblem("The file has a header but no data rows.")]);
+  for (const error of parsed.errors) {
+    const message = QUOTE_MESSAGES[error.code];
+    if (message && error.row !== undefined) problems.push(cellProblem(error.row + 1, null, null, message));
+  }
+  return { ok: true, delimiter, headerWidth: headerCells.length, columns: header.columns, records, problems };
+}
+
+// Column names never contain a delimiter, so the header line alone tells which one the file uses.
+export function sniffDelimiter(text: string): Delimiter {
+  const end = text.indexOf("\n");
+  const firstLine = end === -1 ? text : text.slice(0, end);
+  const counts = new Map<Delimiter, number>(DELIMITERS.map((d) => [d, 0]));
+  let quoted = false;
+  for (const character of firstLine) {
+    if (character === '"') quoted = !quoted;
+    else if (!quoted && counts.has(character as Delimiter)) counts.set(character as Delimiter, counts.get(character as Delimiter)! + 1);
+  }
+  let best: Delimiter = ",";
+  for (const delimiter of DELIMITERS) if (counts.get(delimiter)! > counts.get(best)!) best = delimiter;
+  return best;
+}
+
+/** Trims, lower-cases, turns spaces and hyphens into `_`, and splits off a `[unit]`. */
+export function normaliseHeaderCell(cell: string): { name: string; unit: string | null } {
+  const trimmed = cell.trim();
+  const match = HEADER_UNIT_PATTERN.exec(trimmed);
+  const rawName = match ? match[1] : trimmed;
+  const unit = match && match[2].trim() !== "" ? match[2].trim() : null;
+  return { name: rawName.trim().toLowerCase().replace(/[\s-]+/g, "_"), unit };
+}
+
+function mapHeader(
+  cells: string[],
+  format: IntakeFormat,
+  decimalComma: boolean,
+  problems: IntakeProblem[],
+): { fatal: boolean; columns: MappedColumn[] } {
+  const fixed = new Map(format.columns.map((c) => [c.name, c]));
+  const groups = new Map(format.groups.map((g) => [g.prefix, g]));
+  const seen = new Map<string, number>();
+  const columns: MappedColumn[] = [];
+  const unknown: string[] = [];
+  let fatal = false;
+
+  cells.forEach((cell, index) => {
+    const { name: rawName, unit } = normaliseHeaderCell(cell);
+    if (rawName === "") return;
+    const located = locateColumn(rawName, fixed, groups);
+    if (!located) {
+      unknown.push(rawName);
+      problems.push(cellProblem(1, rawName, cell.trim(), `unknown column "${rawName}" is ignored`, "warning"));
+      return;
+    }
+    const { spec, group, pointNumber } = located;
+    const name = group ? groupColumnName(group, pointNumber, spec) : spec.name;
+    const earlier = seen.get(name);
+    if (earlier !== undefined) {
+      problems.push(cellProblem(1, name, cell.trim(), `column "${name}" appears twice (columns ${earlier + 1} and ${index + 1})`));
+      fatal = true;
+      return;
+    }
+    seen.set(name, index);
+    if (unit !== null) {
+      const unitProblem = checkHeaderUnit(spec, unit);
+      if (unitProblem) {
+        problems.push(cellProblem(1, name, cell.trim(), unitProblem));
+        fatal = true;
+        return;
+      }
+    }
+    columns.push({ index, name, spec, group, pointNumber, read: makeCellReader(spec, { headerUnit: unit ?? "", decimalComma }) });
+  });
+
+  const missing = listMissingColumns(format, seen);
+  if (missing.length > 0) {
+    fatal = true;
+    const otherKind = guessOtherKind(format.kind, seen, unknown);
+    if (cells.length === 1) {
+      problems.length = 0;
+      problems.push(fileProblem("Could not tell the columns apart: the header row has a single column. Separate the columns with commas, semicolons, tabs or vertical bars (|)."));
+    } else if (otherKind) {
+      problems.splice(0, problems.length, ...problems.filter((p) => p.severity === "error"));
+      problems.push(fileProblem(`This looks like ${otherKind === "offers" ? "an offers" : "a parts"} file, not ${format.kind === "offers" ? "an offers" : "a parts"} file: upload it as ${otherKind}.`));
+    } else {
+      problems.push(fileProblem(`Missing required columns: ${missing.join(", ")}.`));
+    }
+  }
+  return { fatal, columns };
+}
+
+function locateColumn(
+  name: string,
+  fixed: Map<string, ColumnSpec>,
+  groups: Map<string, ColumnGroupSpec>,
+): { spec: ColumnSpec; group: ColumnGroupSpec | null; pointNumber: number } | null {
+  const spec = fixed.get(name);
+  if (spec) return { spec, group: null, pointNumber: 0 };
+  const match = GROUP_NAME_PATTERN.exec(name);
+  if (!match) return null;
+  const group = groups.get(match[1]);
+  const pointNumber = Number(match[2]);
+  const member = group?.columns.find((c) => c.name === match[3]);
+  return group && member && pointNumber >= 1 ? { spec: member, group, pointNumber } : null;
+}
+
+// A required group needs its required columns for at least one point number.
+function listMissingColumns(format: IntakeFormat, seen: Map<string, number>): string[] {
+  const missing = format.columns.filter((c) => c.required && !seen.has(c.name)).map((c) => c.name);
+  for (const group of format.groups.filter((g) => g.required)) {
+    for (const column of group.columns.filter((c) => c.required)) {
+      const suffix = `_${column.name}`;
+      const present = [...seen.keys()].some((name) => name.startsWith(group.prefix) && name.endsWith(suffix) && GROUP_NAME_PATTERN.test(name));
+      if (!present) missing.push(groupColumnName(group, 1, column));
+    }
+  }
+  return missing;
+}
+
+function guessOtherKind(kind: IntakeKind, seen: Map<string, number>, unknown: string[]): IntakeKind | null {
+  const other: IntakeKind = kind === "parts" ? "offers" : "parts";
+  const names = new Set([...seen.keys(), ...unknown]);
+  const distinctive = other === "offers" ? ["supplier", "stock", "currency"] : ["polarity", "vceo", "ic_max"];
+  return distinctive.every((name) => names.has(name)) ? other : null;
+}

@@ -1,0 +1,4 @@
+// Every demo seed, in order, loaded through umzug with its own meta table.
+import * as demoTeamAndPeople from "./0001-demo-team-and-people.ts";
+
+export const seeds = [{ name: "0001-demo-team-and-people", ...demoTeamAndPeople }];

@@ -1,0 +1,68 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import { existsSync } from "node:fs";
+import { createServer } from "node:net";
+import path from "node:path";
+
+const root = path.resolve(import.meta.dirname, "../..");
+
+export const TEST_SECRETS = {
+  SESSION_SECRET: "test-session-secret-0123456789abcdef",
+  TOTP_SECRET: "a1".repeat(32),
+};
+
+export async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.once("error", reject);
+    server.listen(0, "127.0.0.1", () => {
+      const { port } = server.address() as { port: number };
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+export function assertBuilt(): void {
+  if (!existsSync(path.join(root, "build/server/index.js"))) {
+    throw new Error("No production build: run `npx react-router build` (npm test does it first).");
+  }
+}
+
+export interface RunningApp {
+  url: string;
+  stop: () => Promise<void>;
+}
+
+/** Starts the production build the way npm start serves it, on a free loopback port. */
+export async function startAppServer(env: Record<string, string>): Promise<RunningApp> {
+  assertBuilt();
+  const port = await freePort();
+  const child: ChildProcess = spawn(path.join(root, "node_modules/.bin/react-router-serve"), ["build/server/index.js"], {
+    cwd: root,
+    env: { ...process.env, ...TEST_SECRETS, NODE_ENV: "production", COOKIE_SECURE: "false", HOST: "127.0.0.1", PORT: String(port), ...env },
+    stdio: ["ignore", "ignore", "pipe"],
+  });
+  let stderr = "";
+  child.stderr?.on("data", (chunk: Buffer) => (stderr += chunk.toString()));
+  const url = `http://127.0.0.1:${port}`;
+  const deadline = Date.now() + 30_000;
+  for (;;) {
+    if (child.exitCode !== null) throw new Error(`the app server exited: ${stderr}`);
+    try {
+      const response = await fetch(`${url}/api/health`);
+      if (response.status === 200) break;
+    } catch {
+      // not listening yet
+    }
+    if (Date.now() > deadline) throw new Error(`the app server did not answer: ${stderr}`);
+    await new Promise((resolve) => setTimeout(resolve, 150));
+  }
+  return {
+    url,
+    stop: () =>
+      new Promise<void>((resolve) => {
+        if (child.exitCode !== null) return resolve();
+        child.once("exit", () => resolve());
+        child.kill("SIGTERM");
+      }),
+  };
+}

@@ -1,0 +1,35 @@
+import request from "supertest";
+import { inject } from "vitest";
+import { magicLinkFrom, signInCodeFrom, waitForMail } from "./mail-catcher.ts";
+
+export type Agent = ReturnType<typeof request.agent>;
+
+export function appUrl(): string {
+  return inject("appUrl");
+}
+
+export function newAgent(url = appUrl()): Agent {
+  return request.agent(url);
+}
+
+/** Asks for a code through the sign-in form and returns the e-mailed code and link. */
+export async function requestCode(agent: Agent, email: string, mailDir = inject("mailDir")) {
+  const since = Date.now();
+  const response = await agent.post("/sign-in").type("form").send({ email });
+  if (response.status !== 302) throw new Error(`sign-in answered ${response.status}`);
+  const mail = await waitForMail(mailDir, email, since);
+  return { code: signInCodeFrom(mail), link: magicLinkFrom(mail), mail };
+}
+
+/** The whole sign-in as a person does it: address, e-mailed code, verify. */
+export async function signIn(agent: Agent, email: string): Promise<void> {
+  const { code } = await requestCode(agent, email);
+  const response = await agent.post("/sign-in/verify").type("form").send({ intent: "verify", code });
+  if (response.status !== 302 || response.headers.location !== "/") {
+    throw new Error(`verify answered ${response.status} to ${response.headers.location}`);
+  }
+}
+
+export function pathOf(location: string | undefined): string {
+  return location ? new URL(location, "http://x").pathname : "";
+}
