@@ -7,6 +7,6 @@ export default [
   route("sign-in/link", "routes/auth/magic-link.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),
   ...prefix("people", [index("routes/people/list.tsx"), route(":personId", "routes/people/person.tsx")]),
-  ...prefix("api", [route("health", "routes/api/health.ts")]),
+  ...prefix("api", [route("health", "routes/api/health.ts"), route("*", "routes/api/not-found.ts")]),
   route("*", "routes/not-found.tsx"),
 ] satisfies RouteConfig;

@@ -136,6 +136,7 @@ export function evaluatePart(part: PartSpec, sheet: RequirementSheet, options: E
   const thermal = checkThermal({
     mode: sheet.mode,
     vceVolts: thermalVce,
+    vceAssumed: switching && saturation == null,
     icAmps,
     dutyCycle: switching ? sheet.dutyCycle : 1,
     ambientC: sheet.ambientC,

@@ -4,7 +4,7 @@ import { operatingVceOf, peakIcOf, peakVceOf } from "./requirement";
 
 /** Above about 50 V a circuit counts as hazardous to touch (common practice, in line with extra-low-voltage limits). */
 export const HAZARDOUS_VOLTS = 50;
-/** Dissipation above which the heat itself is a burn and fire concern (common practice). */
+/** Dissipation above which the heat itself is a burn and fire concern (a product decision). */
 export const LARGE_POWER_WATTS = 10;
 
 const SCREENING =

@@ -133,21 +133,9 @@ const NUMBER_PATTERN = /^([+-]?)(\d*)(?:([.,])(\d*))?(?:[eE]([+-]?\d+))?\s*(.*)$
 // RKM style (`3k3`, `4R7`, `R47`, `4u7F`, `3V3`): the letter stands for the decimal point.
 const LETTER_POINT_PATTERN = /^([^\d\s.,])(\d+)(.*)$/s;
 
-const CACHE_LIMIT = 4096;
-const caches = new Map<Dimension, Map<string, ParseResult>>(DIMENSIONS.map((d) => [d, new Map()]));
-
 /** Parses one cell as a quantity of the given dimension into SI base units (temperatures in °C). */
 export function parseQuantity(text: string, dimension: Dimension, options?: ParseOptions): ParseResult {
-  const headerUnit = options?.headerUnit ?? "";
-  const key = `${options?.decimalComma ? "," : "."}${headerUnit}\u0000${text}`;
-  const cache = caches.get(dimension)!;
-  const cached = cache.get(key);
-  if (cached) return cached;
-  const result = parseUncached(text, dimension, headerUnit, options?.decimalComma === true);
-  // Dropping the whole cache when full keeps it bounded without LRU bookkeeping.
-  if (cache.size >= CACHE_LIMIT) cache.clear();
-  cache.set(key, result);
-  return result;
+  return parseUncached(text, dimension, options?.headerUnit ?? "", options?.decimalComma === true);
 }
 
 function parseUncached(text: string, dimension: Dimension, headerUnit: string, decimalComma: boolean): ParseResult {

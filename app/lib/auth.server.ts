@@ -119,7 +119,7 @@ export async function requireUser(request: Request): Promise<Person> {
   const person = await getOptionalUser(request);
   if (person) return person;
   if (wantsJson(request)) {
-    throw Response.json({ error: { code: "unauthenticated", message: "Sign in first." } }, { status: 401 });
+    throw Response.json({ error: { code: "unauthenticated", message: "Sign in first.", details: null } }, { status: 401 });
   }
   const url = new URL(request.url);
   const redirectTo = url.pathname === "/" ? "" : `?redirectTo=${encodeURIComponent(url.pathname + url.search)}`;
@@ -131,7 +131,7 @@ export async function requireRole(request: Request, ...roles: Role[]): Promise<P
   const person = await requireUser(request);
   if (hasRole(person.roles, roles)) return person;
   const message = `This needs the ${roles.join(" or ")} role.`;
-  if (wantsJson(request)) throw Response.json({ error: { code: "forbidden", message } }, { status: 403 });
+  if (wantsJson(request)) throw Response.json({ error: { code: "forbidden", message, details: null } }, { status: 403 });
   throw new Response(message, { status: 403, statusText: "Forbidden" });
 }
 

@@ -3,9 +3,6 @@ import type { Route } from "./+types/not-found";
 
 export async function loader({ request }: Route.LoaderArgs) {
   const { pathname } = new URL(request.url);
-  if (pathname.startsWith("/api/")) {
-    throw Response.json({ error: { code: "not-found", message: `No API route at ${pathname}.` } }, { status: 404 });
-  }
   return data({ pathname }, { status: 404 });
 }
 

@@ -60,8 +60,10 @@ export function parseWrdata(text: string): Vectors {
   if (lines.length < 2) throw new Error(`ngspice wrote no data rows:\n${text}`);
   const names = lines[0].split(/\s+/).map((name) => name.toLowerCase());
   const vectors: Vectors = {};
+  // The sweep variable of dc (e.g. "v-sweep"), tran ("time") and ac ("frequency") comes first; "op" writes none.
+  const isScale = (name: string, index: number) => index === 0 && names.length > 1 && /sweep$|^time$|^frequency$/.test(name);
   names.forEach((name, index) => {
-    vectors[index === 0 && names.length > 1 && /sweep|^v-sweep|^i-sweep/.test(name) ? "scale" : name] = [];
+    vectors[isScale(name, index) ? "scale" : name] = [];
   });
   const keys = Object.keys(vectors);
   for (const line of lines.slice(1)) {

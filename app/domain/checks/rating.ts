@@ -9,7 +9,7 @@ export interface RatingJudgement {
   deratedLimit: number;
 }
 
-/** Above the absolute maximum fails; above the derated limit is marginal (inside the derating); else fits. */
+/** Above the absolute maximum fails (rating-below-supply names any exceeded maximum); above the derated limit is marginal (inside-derating); else fits. */
 export function judgeAgainstRating(demand: number, rating: number, fraction: number): RatingJudgement {
   const deratedLimit = rating * fraction;
   const margin = (deratedLimit - demand) / deratedLimit;

@@ -102,6 +102,10 @@ describe("checkThermal", () => {
     expect(result.inputs.find((input) => input.symbol === "Rth(j-a)")?.value).toBeCloseTo(200, 9);
     expect(result.inputs.find((input) => input.symbol === "Tj(max)")?.label).toMatch(/assumed/);
   });
+  it("labels an assumed VCE(sat)", () => {
+    const result = checkThermal({ ...SMALL, mode: "switching", vceVolts: 1, vceAssumed: true });
+    expect(result.inputs.find((input) => input.symbol === "VCE")?.label).toBe("VCE(sat), assumed (not quoted)");
+  });
   it("is marginal without any thermal data", () => {
     const result = checkThermal({ ...SMALL, rthJaCPerW: null, ptotWatts: null, ptotReference: null });
     expect(result).toMatchObject({ verdict: "marginal", margin: null });

@@ -15,6 +15,8 @@ export interface ThermalCheckInput {
   mode: Mode;
   /** VCE at the operating point (linear) or VCE(sat) at the operating IC (switching); inside a Darlington the driver's VCE − VBE2. */
   vceVolts: number;
+  /** True when vceVolts is a default rather than a quoted or simulated value. */
+  vceAssumed?: boolean;
   icAmps: number;
   /** Conducting fraction of time; only used when switching. */
   dutyCycle: number;
@@ -87,7 +89,12 @@ export function checkThermal(input: ThermalCheckInput): CheckResult {
   const tjLimitC = deratedTjMaxC(input.derating, tjMaxC);
   const inputs: CheckInput[] = [
     { symbol: "P", label: input.mode === "switching" ? "dissipation VCE(sat) × IC × duty" : "dissipation VCE × IC", value: powerWatts, unit: "W" },
-    { symbol: "VCE", label: input.mode === "switching" ? "VCE(sat)" : "VCE at the operating point", value: input.vceVolts, unit: "V" },
+    {
+      symbol: "VCE",
+      label: `${input.mode === "switching" ? "VCE(sat)" : "VCE at the operating point"}${input.vceAssumed ? ", assumed (not quoted)" : ""}`,
+      value: input.vceVolts,
+      unit: "V",
+    },
     { symbol: "IC", label: "collector current", value: input.icAmps, unit: "A" },
     { symbol: "Ta", label: "ambient", value: input.ambientC, unit: "°C" },
     { symbol: "Tj(max)", label: input.tjMaxC == null ? "Tj max, assumed (not quoted)" : "Tj max", value: tjMaxC, unit: "°C" },

@@ -18,6 +18,7 @@ const EMPTY: CellResult = { ok: true, value: null };
 const DATE_PATTERN = /^(\d{4})-(\d{2})-(\d{2})$/;
 const CURRENCY_PATTERN = /^[A-Za-z]{3}$/;
 const ISO_CURRENCIES = new Set(Intl.supportedValuesOf("currency"));
+const COLUMN_CACHE_LIMIT = 4096;
 const FORMULA_STARTS = new Set(["=", "+", "-", "@"]);
 
 /** Checks a header unit against the column once, before any cell is read. */
@@ -74,11 +75,20 @@ function makeTypedReader(spec: ColumnSpec, context: ReaderContext): CellReader {
 }
 
 // Ranges and whole-number rules live in the zod schema, so the edit form shares them.
+// A column repeats its values ("5 V", "25 °C"), so each reader keeps the first few thousand results.
 function makeNumberReader(dimension: Dimension, options: ParseOptions): CellReader {
+  const cache = new Map<string, CellResult>();
   return (value) => {
+    const cached = cache.get(value);
+    if (cached) return cached;
     const parsed = parseQuantity(value, dimension, options);
-    if (parsed.ok) return { ok: true, value: parsed.value };
-    return value[0] === "=" || value[0] === "@" ? formulaProblem(value) : { ok: false, message: parsed.reason };
+    const result: CellResult = parsed.ok
+      ? { ok: true, value: parsed.value }
+      : value[0] === "=" || value[0] === "@"
+        ? formulaProblem(value)
+        : { ok: false, message: parsed.reason };
+    if (cache.size < COLUMN_CACHE_LIMIT) cache.set(value, result);
+    return result;
   };
 }
 

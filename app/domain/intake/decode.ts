@@ -85,10 +85,8 @@ function lineOfFirstInvalidByte(bytes: Uint8Array): number {
 }
 
 // Tab, line feed and carriage return belong in CSV; other C0 controls (and DEL) mean a binary file.
+const CONTROL_CHARACTER = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
+
 function hasControlCharacters(text: string): boolean {
-  for (let i = 0; i < text.length; i += 1) {
-    const code = text.charCodeAt(i);
-    if ((code < 0x20 && code !== 0x09 && code !== 0x0a && code !== 0x0d) || code === 0x7f) return true;
-  }
-  return false;
+  return CONTROL_CHARACTER.test(text);
 }

@@ -92,11 +92,11 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
 
 function pointFor(raw: RawRow, group: ColumnGroupSpec, pointNumber: number): RawPoint {
   const points = raw.points[group.field];
-  let point = points.find((p) => p.pointNumber === pointNumber);
-  if (!point) {
-    point = { pointNumber, values: Object.fromEntries(group.columns.map((c) => [c.field, null])) };
-    points.push(point);
-  }
+  for (const point of points) if (point.pointNumber === pointNumber) return point;
+  const values: Record<string, CellValue> = {};
+  for (const column of group.columns) values[column.field] = null;
+  const point = { pointNumber, values };
+  points.push(point);
   return point;
 }
 
