@@ -132,13 +132,13 @@ function buildExponents(table: DimensionTable): Map<string, number> {
 const NUMBER_PATTERN = /^([+-]?)(\d*)(?:([.,])(\d*))?(?:[eE]([+-]?\d+))?\s*(.*)$/s;
 // RKM style (`3k3`, `4R7`, `R47`, `4u7F`, `3V3`): the letter stands for the decimal point.
 const LETTER_POINT_PATTERN = /^([^\d\s.,])(\d+)(.*)$/s;
+const STARTS_WITH_DIGIT = /^[\d.,]/;
+const NON_ZERO_DIGIT = /[1-9]/;
 
 /** Parses one cell as a quantity of the given dimension into SI base units (temperatures in °C). */
 export function parseQuantity(text: string, dimension: Dimension, options?: ParseOptions): ParseResult {
-  return parseUncached(text, dimension, options?.headerUnit ?? "", options?.decimalComma === true);
-}
-
-function parseUncached(text: string, dimension: Dimension, headerUnit: string, decimalComma: boolean): ParseResult {
+  const headerUnit = options?.headerUnit ?? "";
+  const decimalComma = options?.decimalComma === true;
   const trimmed = text.trim();
   if (trimmed === "") return fail("empty");
   const match = NUMBER_PATTERN.exec(trimmed);
@@ -164,10 +164,10 @@ function parseUncached(text: string, dimension: Dimension, headerUnit: string, d
     }
   }
 
-  if (/^[\d.,]/.test(rest)) {
+  if (STARTS_WITH_DIGIT.test(rest)) {
     return fail(`not a number: "${trimmed}" (write numbers without thousands separators or spaces)`);
   }
-  if (separator === "," && !decimalComma && fraction.length === 3 && /[1-9]/.test(integer)) {
+  if (separator === "," && !decimalComma && fraction.length === 3 && NON_ZERO_DIGIT.test(integer)) {
     return fail(`ambiguous: "${trimmed}" may use a thousands separator or a decimal comma; write ${integer}${fraction} or ${integer}.${fraction}`);
   }
 

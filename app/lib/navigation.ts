@@ -7,9 +7,11 @@ export interface NavItem {
   roles: Role[];
 }
 
-// Only what exists so far; later areas (Catalogue, Intakes, Requirement sheets, Shortlists, Orders) join here.
+// Only what exists so far; later areas (Requirement sheets, Shortlists, Orders) join here.
 export const NAV_ITEMS: NavItem[] = [
   { label: "Dashboard", path: "/", roles: [] },
+  { label: "Catalogue", path: "/catalogue", roles: [] },
+  { label: "Intakes", path: "/intakes", roles: ["librarian"] },
   { label: "People", path: "/people", roles: ["admin"] },
 ];
 
@@ -32,13 +34,13 @@ export const NEXT_STEPS: NextStep[] = [
     role: "librarian",
     title: "Build the catalogue",
     text: "Import datasheet values and supplier offers from CSV intakes, check every flagged cell, commit, and roll back an intake that went wrong.",
-    link: null,
+    link: { label: "Start an intake", path: "/intakes/new" },
   },
   {
     role: "engineer",
     title: "Find the right transistor",
-    text: "Write a requirement sheet for your circuit and get every part and Darlington or Sziklai pair scored at its real operating point, each flag explained.",
-    link: null,
+    text: "Browse the catalogue now; requirement sheets that score every part and Darlington or Sziklai pair at your circuit's operating point come next.",
+    link: { label: "Browse the catalogue", path: "/catalogue" },
   },
   {
     role: "purchaser",

@@ -10,6 +10,8 @@ type Expectation = Record<Visitor, number>;
 
 interface Ids {
   librarianId: string;
+  partId: string;
+  intakeId: string;
 }
 
 interface Row {
@@ -25,6 +27,7 @@ const pageFor = (roles: Visitor[], ok = 200): Expectation =>
 const apiFor = (roles: Visitor[], ok = 200): Expectation => ({ ...pageFor(roles, ok), anonymous: 401 });
 const everyone = (status: number): Expectation => Object.fromEntries(VISITORS.map((v) => [v, status])) as Expectation;
 const signedIn = (status: number): Expectation => ({ ...everyone(status), anonymous: 302 });
+const signedInApi = (status: number): Expectation => ({ ...everyone(status), anonymous: 401 });
 
 const rows: Row[] = [
   { method: "GET", path: "/", expect: signedIn(200) },
@@ -35,7 +38,27 @@ const rows: Row[] = [
   { method: "GET", path: (ids) => `/people/${ids.librarianId}`, expect: pageFor([]) },
   { method: "POST", path: (ids) => `/people/${ids.librarianId}`, expect: pageFor([], 400) },
   { method: "GET", path: "/people/not-a-uuid", expect: pageFor([], 404) },
+  { method: "GET", path: "/catalogue", expect: signedIn(200) },
+  { method: "GET", path: (ids) => `/catalogue/${ids.partId}`, expect: signedIn(200) },
+  { method: "GET", path: "/catalogue/00000000-0000-4000-8000-000000000000", expect: signedIn(404) },
+  { method: "GET", path: (ids) => `/catalogue/${ids.partId}/edit`, expect: pageFor(["librarian"]) },
+  { method: "POST", path: (ids) => `/catalogue/${ids.partId}/edit`, expect: pageFor(["librarian"], 400) },
+  { method: "GET", path: "/intakes", expect: pageFor(["librarian"]) },
+  { method: "GET", path: "/intakes/new", expect: pageFor(["librarian"]) },
+  { method: "GET", path: "/intakes/formats", expect: pageFor(["librarian"]) },
+  { method: "GET", path: "/intakes/templates/parts", expect: pageFor(["librarian"]) },
+  { method: "GET", path: "/intakes/templates/offers", expect: pageFor(["librarian"]) },
+  { method: "GET", path: (ids) => `/intakes/${ids.intakeId}`, expect: pageFor(["librarian"]) },
+  { method: "GET", path: (ids) => `/intakes/${ids.intakeId}/file`, expect: pageFor(["librarian"]) },
   { method: "GET", path: "/api/health", expect: everyone(200) },
+  { method: "GET", path: "/api/parts", expect: signedInApi(200) },
+  { method: "GET", path: "/api/parts?polarity=sideways", expect: signedInApi(400) },
+  { method: "GET", path: (ids) => `/api/parts/${ids.partId}`, expect: signedInApi(200) },
+  { method: "GET", path: "/api/parts/not-a-uuid", expect: signedInApi(404) },
+  { method: "GET", path: "/api/intakes", expect: apiFor(["librarian"]) },
+  { method: "POST", path: "/api/intakes", expect: apiFor(["librarian"], 400) },
+  { method: "GET", path: (ids) => `/api/intakes/${ids.intakeId}`, expect: apiFor(["librarian"]) },
+  { method: "POST", path: (ids) => `/api/intakes/${ids.intakeId}/frobnicate`, expect: apiFor(["librarian"], 404) },
   { method: "GET", path: "/no/such/page", expect: everyone(404) },
   { method: "GET", path: "/api/no-such-thing", expect: everyone(404) },
 ];
@@ -51,15 +74,19 @@ beforeAll(async () => {
     agents.set(role, agent);
   }
   const sequelize = connect(inject("databaseUrl"));
-  const [found] = await sequelize.query(`SELECT id FROM users WHERE email = 'librarian@larkfield.example.com'`);
+  const first = async (sql: string) => ((await sequelize.query(sql))[0][0] as { id: string } | undefined)?.id ?? "missing";
+  ids = {
+    librarianId: await first(`SELECT id FROM users WHERE email = 'librarian@larkfield.example.com'`),
+    partId: await first(`SELECT id FROM parts ORDER BY manufacturer, part_number LIMIT 1`),
+    intakeId: await first(`SELECT id FROM intakes ORDER BY created_at LIMIT 1`),
+  };
   await sequelize.close();
-  ids = { librarianId: (found[0] as { id: string }).id };
 });
 
 describe("role matrix", () => {
   for (const row of rows) {
     for (const visitor of VISITORS) {
-      const label = typeof row.path === "string" ? row.path : row.path({ librarianId: ":personId" });
+      const label = typeof row.path === "string" ? row.path : row.path({ librarianId: ":personId", partId: ":partId", intakeId: ":intakeId" });
       it(`${row.method} ${label} as ${visitor} answers ${row.expect[visitor]}`, async () => {
         const agent = agents.get(visitor)!;
         const path = typeof row.path === "string" ? row.path : row.path(ids);

@@ -20,15 +20,23 @@ export interface MappedColumn {
   read: CellReader;
 }
 
+export interface TableRecord {
+  /** Row number as a spreadsheet shows it (header = 1), counted in records, not lines. */
+  row: number;
+  cells: string[];
+  /** Quoting broke in this record, so its cells cannot be trusted. */
+  quoteProblem: string | null;
+}
+
 export interface Table {
   /** False when a file-level or header error refuses the whole file. */
   ok: boolean;
   delimiter: Delimiter;
   headerWidth: number;
   columns: MappedColumn[];
-  /** Every record after the header, with its spreadsheet row number; blank records are left out. */
-  records: Array<{ row: number; cells: string[] }>;
   problems: IntakeProblem[];
+  /** Visits every non-blank record after the header, in order, without holding them all in memory. */
+  eachRecord: (visit: (record: TableRecord) => void) => void;
 }
 
 const GROUP_NAME_PATTERN = /^([a-z]+)(\d+)_(.+)$/;
@@ -38,29 +46,34 @@ const QUOTE_MESSAGES: Readonly<Record<string, string>> = {
   InvalidQuotes: "a double quote inside a quoted cell must be doubled (\"\")",
 };
 
-/** Decodes, splits and maps a file onto a format; rows are not validated here. */
+/** Decodes a file and maps its header onto a format; the records are streamed by `eachRecord`. */
 export function readTable(bytes: Uint8Array, format: IntakeFormat): Table {
-  const refused = (problems: IntakeProblem[]): Table => ({ ok: false, delimiter: ",", headerWidth: 0, columns: [], records: [], problems });
+  const refused = (problems: IntakeProblem[]): Table => ({ ok: false, delimiter: ",", headerWidth: 0, columns: [], problems, eachRecord: () => {} });
   const decoded = decodeIntakeBytes(bytes);
   if (!decoded.ok) return refused([decoded.problem]);
+  const text = decoded.text;
 
-  const delimiter = sniffDelimiter(decoded.text);
-  const parsed = Papa.parse<string[]>(decoded.text, { delimiter, header: false, skipEmptyLines: false, quoteChar: '"' });
-  const [headerCells = [], ...body] = parsed.data;
+  const delimiter = sniffDelimiter(text);
+  const options = { delimiter, header: false, skipEmptyLines: false, quoteChar: '"' } as const;
+  const headerCells = Papa.parse<string[]>(text, { ...options, preview: 1 }).data[0] ?? [];
   const problems: IntakeProblem[] = [];
   const header = mapHeader(headerCells, format, delimiter !== ",", problems);
   if (header.fatal) return refused(problems);
 
-  const records: Table["records"] = [];
-  body.forEach((cells, i) => {
-    if (!cells.every((cell) => cell.trim() === "")) records.push({ row: i + 2, cells });
-  });
-  if (records.length === 0) return refused([...problems, fileProblem("The file has a header but no data rows.")]);
-  for (const error of parsed.errors) {
-    const message = QUOTE_MESSAGES[error.code];
-    if (message && error.row !== undefined) problems.push(cellProblem(error.row + 1, null, null, message));
-  }
-  return { ok: true, delimiter, headerWidth: headerCells.length, columns: header.columns, records, problems };
+  const eachRecord = (visit: (record: TableRecord) => void) => {
+    let index = 0;
+    Papa.parse<string[]>(text, {
+      ...options,
+      step: (result) => {
+        index += 1;
+        const cells = result.data;
+        if (index === 1 || cells.every((cell) => cell.trim() === "")) return;
+        const quoteError = result.errors.find((e) => QUOTE_MESSAGES[e.code] !== undefined);
+        visit({ row: index, cells, quoteProblem: quoteError ? QUOTE_MESSAGES[quoteError.code] : null });
+      },
+    });
+  };
+  return { ok: true, delimiter, headerWidth: headerCells.length, columns: header.columns, problems, eachRecord };
 }
 
 // Column names never contain a delimiter, so the header line alone tells which one the file uses.

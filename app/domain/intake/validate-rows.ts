@@ -2,8 +2,8 @@
 import type { z } from "zod";
 import type { CellValue } from "./cells";
 import { groupColumnName, type ColumnGroupSpec, type IntakeFormat } from "./columns";
-import { cellProblem, type IntakeKind, type IntakeParseResult, type IntakeProblem, type IntakeRow } from "./problems";
-import type { Table } from "./read-table";
+import { cellProblem, fileProblem, type IntakeKind, type IntakeParseResult, type IntakeProblem, type IntakeRow } from "./problems";
+import type { Table, TableRecord } from "./read-table";
 
 /** One numbered point (`gain2_*`) as read from the cells. */
 export interface RawPoint {
@@ -36,15 +36,20 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
 
   const rows: Array<IntakeRow<V>> = [];
   const firstRowByKey = new Map<string, number>();
-  const rowsWithQuoteErrors = new Set(table.problems.filter((p) => p.row !== null && p.row > 1).map((p) => p.row));
   const locator = makeIssueLocator(format);
+  let recordCount = 0;
 
-  for (const record of table.records) {
+  table.eachRecord((record) => {
+    recordCount += 1;
     const rowProblems: IntakeProblem[] = [];
     // Cells of a row with a broken quote or too many cells are shifted; judging them would only add noise.
-    if (rowsWithQuoteErrors.has(record.row) || !checkWidth(record, table, rowProblems)) {
+    if (record.quoteProblem !== null) {
+      problems.push(cellProblem(record.row, null, null, record.quoteProblem));
+      return;
+    }
+    if (!checkWidth(record, table, rowProblems)) {
       problems.push(...rowProblems);
-      continue;
+      return;
     }
     const raw: RawRow = { fields: {}, points: {} };
     for (const group of format.groups) raw.points[group.field] = [];
@@ -86,7 +91,8 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
 
     problems.push(...rowProblems);
     if (parsed.success && rowProblems.length === 0) rows.push({ row: record.row, value: parsed.data });
-  }
+  });
+  if (recordCount === 0) return { kind, rows: [], problems: [...problems, fileProblem("The file has a header but no data rows.")] };
   return { kind, rows, problems };
 }
 
@@ -100,7 +106,7 @@ function pointFor(raw: RawRow, group: ColumnGroupSpec, pointNumber: number): Raw
   return point;
 }
 
-function checkWidth(record: { row: number; cells: string[] }, table: Table, problems: IntakeProblem[]): boolean {
+function checkWidth(record: TableRecord, table: Table, problems: IntakeProblem[]): boolean {
   let width = record.cells.length;
   while (width > table.headerWidth && record.cells[width - 1].trim() === "") width -= 1;
   if (width <= table.headerWidth) return true;
