@@ -30,7 +30,7 @@ export function checkHeaderUnit(spec: ColumnSpec, unit: string): string | null {
 
 /** Builds the reader for one column once, so the per-cell path does no set-up work. */
 export function makeCellReader(spec: ColumnSpec, context: ReaderContext): CellReader {
-  const read = makeTypedReader(spec, context);
+  const read = spec.type.kind === "text" ? makeTypedReader(spec, context) : withCache(makeTypedReader(spec, context));
   return (cell) => {
     const value = cell.trim();
     if (value === "") return EMPTY;
@@ -38,6 +38,18 @@ export function makeCellReader(spec: ColumnSpec, context: ReaderContext): CellRe
       return { ok: false, message: `the cell is ${value.length} characters long; at most ${MAX_CELL_LENGTH} are accepted` };
     }
     return read(value);
+  };
+}
+
+// A column repeats its values ("5 V", "25 °C", a date), so each reader keeps its first few thousand results.
+function withCache(read: CellReader): CellReader {
+  const cache = new Map<string, CellResult>();
+  return (value) => {
+    const cached = cache.get(value);
+    if (cached) return cached;
+    const result = read(value);
+    if (cache.size < COLUMN_CACHE_LIMIT) cache.set(value, result);
+    return result;
   };
 }
 
@@ -75,20 +87,11 @@ function makeTypedReader(spec: ColumnSpec, context: ReaderContext): CellReader {
 }
 
 // Ranges and whole-number rules live in the zod schema, so the edit form shares them.
-// A column repeats its values ("5 V", "25 °C"), so each reader keeps the first few thousand results.
 function makeNumberReader(dimension: Dimension, options: ParseOptions): CellReader {
-  const cache = new Map<string, CellResult>();
   return (value) => {
-    const cached = cache.get(value);
-    if (cached) return cached;
     const parsed = parseQuantity(value, dimension, options);
-    const result: CellResult = parsed.ok
-      ? { ok: true, value: parsed.value }
-      : value[0] === "=" || value[0] === "@"
-        ? formulaProblem(value)
-        : { ok: false, message: parsed.reason };
-    if (cache.size < COLUMN_CACHE_LIMIT) cache.set(value, result);
-    return result;
+    if (parsed.ok) return { ok: true, value: parsed.value };
+    return value[0] === "=" || value[0] === "@" ? formulaProblem(value) : { ok: false, message: parsed.reason };
   };
 }
 

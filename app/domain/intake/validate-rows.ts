@@ -53,19 +53,20 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
     }
     const raw: RawRow = { fields: {}, points: {} };
     for (const group of format.groups) raw.points[group.field] = [];
-    const badColumns = new Set<string>();
+    let badColumns: Set<string> | null = null;
 
     for (const column of table.columns) {
       const cell = record.cells[column.index] ?? "";
       const result = column.read(cell);
       if (!result.ok) {
+        badColumns ??= new Set();
         badColumns.add(column.name);
         rowProblems.push(cellProblem(record.row, column.name, cell.trim(), result.message));
       }
       const value = result.ok ? result.value : null;
-      // A point exists when any of its cells is filled in, even one that failed to parse.
+      // A point exists when any of its cells is filled in (only empty cells read as null), even one that failed.
       if (column.group) {
-        if (cell.trim() !== "") pointFor(raw, column.group, column.pointNumber).values[column.spec.field] = value;
+        if (!result.ok || value !== null) pointFor(raw, column.group, column.pointNumber).values[column.spec.field] = value;
       } else {
         raw.fields[column.spec.field] = value;
       }
@@ -76,7 +77,7 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
         const place = locator(issue.path, raw);
-        if (badColumns.has(place.column)) continue;
+        if (badColumns?.has(place.column)) continue;
         rowProblems.push(cellProblem(record.row, place.column, cellText(record.cells, table, place.column), place.context + issue.message));
       }
     }

@@ -75,7 +75,7 @@ export default function People({ loaderData, actionData }: Route.ComponentProps)
       <p className="mt-1 text-sm text-ink/70">They sign in with a code e-mailed to this address; no password is ever set.</p>
       {actionData?.invited ? (
         <div className="mt-4">
-          <Notice tone="info">{actionData.invited} can sign in now.</Notice>
+          <Notice tone="info">{`${actionData.invited} can sign in now.`}</Notice>
         </div>
       ) : null}
       <Form method="post" className="mt-4 grid max-w-xl gap-4" noValidate>
