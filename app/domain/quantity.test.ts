@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { DIMENSIONS, formatQuantity, lookUpUnit, parseQuantity, type Dimension } from "./quantity";
+import { DIMENSIONS, formatQuantity, lookUpUnit, parseQuantity, unitSymbol, type Dimension } from "./quantity";
 
 // Prefix values: SI Brochure, 9th edition (BIPM 2019), table 7 (from memory).
 // RKM letter-for-decimal-point marking (4R7, 3k3, 4u7): IEC 60062 (from memory).
@@ -76,6 +76,8 @@ const rejected: Array<[string, Dimension, string]> = [
   ["=A1*2", "voltage", 'not a number: "=A1*2"'],
   ["3 mV/s", "voltage", 'unknown unit "mV/s"'],
   ["10 furlongs", "voltage", 'unknown unit "furlongs"'],
+  ["5 constructor", "voltage", 'unknown unit "constructor"'],
+  ["5 toString", "temperature", 'unknown unit "toString"'],
   ["5 mA", "voltage", "a current (mA) where a voltage is expected"],
   ["40 V", "current", "a voltage (V) where a current is expected"],
   ["250 mW", "current", "a power (mW) where a current is expected"],
@@ -118,7 +120,7 @@ describe("parseQuantity", () => {
     });
   });
 
-  it("treats every comma as decimal when the file says so (semicolon or tab files)", () => {
+  it("treats every comma as decimal when the file says so (semicolon-separated files)", () => {
     expect(parseQuantity("1,000 V", "voltage", { decimalComma: true })).toEqual({ ok: true, value: 1 });
     expect(parseQuantity("1,250", "power", { decimalComma: true })).toEqual({ ok: true, value: 1.25 });
   });
@@ -148,6 +150,14 @@ describe("lookUpUnit", () => {
     expect(lookUpUnit("mA", "current")).toEqual({ ok: true, value: -3 });
     expect(lookUpUnit("°C/W", "thermal-resistance")).toEqual({ ok: true, value: 0 });
     expect(lookUpUnit("kV", "current")).toEqual({ ok: false, reason: "a voltage (kV) where a current is expected" });
+  });
+});
+
+describe("unitSymbol", () => {
+  it("gives the display symbol, Unicode or ASCII", () => {
+    expect(DIMENSIONS.map((d) => unitSymbol(d))).toEqual(["V", "A", "W", "°C", "°C/W", "Hz", "F", "Ω", "s", ""]);
+    expect(unitSymbol("resistance", { ascii: true })).toBe("ohm");
+    expect(unitSymbol("thermal-resistance", { ascii: true })).toBe("C/W");
   });
 });
 

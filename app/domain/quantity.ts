@@ -21,7 +21,7 @@ export type ParseResult = { ok: true; value: number } | { ok: false; reason: str
 export interface ParseOptions {
   /** Unit given once for a whole column (e.g. from a `[mA]` header); a unit in the cell wins. */
   headerUnit?: string;
-  /** The cell comes from a semicolon/tab file, so a comma is always the decimal separator. */
+  /** The cell comes from a semicolon-separated file, so a comma is always the decimal separator. */
   decimalComma?: boolean;
 }
 
@@ -61,6 +61,8 @@ const PREFIXES: Readonly<Record<string, number>> = {
   G: 9,
   T: 12,
 };
+
+const PREFIX_EXPONENTS = new Map(Object.entries(PREFIXES));
 
 const OHM_SPELLINGS = ["\u03a9", "\u2126", "ohm", "ohms", "Ohm", "Ohms", "OHM", "R"];
 const CELSIUS_SPELLINGS = ["\u00b0C", "\u00baC", "\u2103", "C", "degC", "deg C"];
@@ -116,12 +118,12 @@ function buildExponents(table: DimensionTable): Map<string, number> {
   for (const spelling of table.spellings) {
     exponents.set(spelling, 0);
     if (!table.prefixed || spelling === "R") continue;
-    for (const [prefix, exponent] of Object.entries(PREFIXES)) {
+    for (const [prefix, exponent] of PREFIX_EXPONENTS) {
       if (!exponents.has(prefix + spelling)) exponents.set(prefix + spelling, exponent);
     }
   }
   if (table.barePrefix) {
-    for (const [prefix, exponent] of Object.entries(PREFIXES)) {
+    for (const [prefix, exponent] of PREFIX_EXPONENTS) {
       if (!exponents.has(prefix)) exponents.set(prefix, exponent);
     }
   }
@@ -198,9 +200,9 @@ export function lookUpUnit(unit: string, dimension: Dimension): ParseResult {
   const exponent = UNIT_EXPONENTS.get(dimension)!.get(unit);
   if (exponent !== undefined) return { ok: true, value: exponent };
   const table = TABLES[dimension];
-  const refusal = table.refused?.[unit];
+  const refusal = table.refused && Object.hasOwn(table.refused, unit) ? table.refused[unit] : undefined;
   if (refusal) return fail(`${refusal} (got "${unit}")`);
-  if (PREFIXES[unit] !== undefined) {
+  if (PREFIX_EXPONENTS.has(unit)) {
     return table.prefixed
       ? fail(`"${unit}" is a prefix without its unit; write ${unit}${table.symbol}`)
       : fail(`"${unit}" is an SI prefix, which ${table.noun} does not take; write the whole number`);
@@ -211,7 +213,7 @@ export function lookUpUnit(unit: string, dimension: Dimension): ParseResult {
       return fail(`${TABLES[other].noun} (${unit}) where ${table.noun} is expected`);
     }
   }
-  if (!table.prefixed && table.spellings.some((s) => s !== "" && unit.endsWith(s) && PREFIXES[unit.slice(0, -s.length)] !== undefined)) {
+  if (!table.prefixed && table.spellings.some((s) => s !== "" && unit.endsWith(s) && PREFIX_EXPONENTS.has(unit.slice(0, -s.length)))) {
     return fail(`${table.noun} takes no SI prefix (got "${unit}"); give the value in ${table.symbol}`);
   }
   return fail(`unknown unit "${unit}"`);

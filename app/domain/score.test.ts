@@ -11,6 +11,7 @@ import {
   scoreCost,
   scoreDataQuality,
   scoreMargins,
+  shareOfMargin,
   scoreStock,
   validateWeights,
   type ScoreComponents,
@@ -82,11 +83,13 @@ describe("chooseOffer", () => {
 });
 
 describe("score components", () => {
-  it("scores margins from the tightest and the mean, full at 50% headroom", () => {
+  it("scores margins from the tightest check, full at 50% headroom", () => {
     expect(scoreMargins([makeCheck(0.5), makeCheck(1)])).toBe(1);
-    expect(scoreMargins([makeCheck(0.25), makeCheck(0.5)])).toBeCloseTo(0.5 * 0.5 + 0.5 * 0.75, 12);
+    expect(scoreMargins([makeCheck(0.25), makeCheck(0.4)])).toBeCloseTo(0.5, 12);
     expect(scoreMargins([makeCheck(-0.2), makeCheck(null)])).toBe(0);
     expect(scoreMargins([])).toBe(1);
+    expect(shareOfMargin(0.1)).toBeCloseTo(0.2, 12);
+    expect(shareOfMargin(0.1, 0.2)).toBeCloseTo(0.5, 12);
   });
 
   it("scores cost against the cheapest candidate and gives nothing for a part without a price", () => {

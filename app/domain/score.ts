@@ -120,19 +120,18 @@ function clampUnit(value: number): number {
   return value < 0 ? 0 : value > 1 ? 1 : value;
 }
 
-/** Headroom on 0..1: half from the tightest check, half from the mean, each full at FULL_MARGIN. */
+/** Headroom on 0..1 from the tightest check, as the verdict follows the worst one; full at FULL_MARGIN. */
 export function scoreMargins(checks: readonly CheckResult[], fullMargin = FULL_MARGIN): number {
-  let count = 0;
-  let sum = 0;
   let least = 1;
   for (const check of checks) {
-    if (check.margin === null) continue;
-    const share = clampUnit(check.margin / fullMargin);
-    sum += share;
-    least = Math.min(least, share);
-    count += 1;
+    if (check.margin !== null) least = Math.min(least, shareOfMargin(check.margin, fullMargin));
   }
-  return count === 0 ? 1 : 0.5 * least + 0.5 * (sum / count);
+  return least;
+}
+
+/** One margin's share of the margin score: 0 at no headroom, 1 at fullMargin or more. */
+export function shareOfMargin(margin: number, fullMargin = FULL_MARGIN): number {
+  return clampUnit(margin / fullMargin);
 }
 
 /** Cost on 0..1 against the cheapest candidate: the cheapest scores 1, twice its price 0.5; no price 0. */

@@ -1,8 +1,10 @@
 // Every migration, in order. Listed statically so that tsx, Vitest and the app build all load them the same way.
 import * as teamsUsersRoles from "./0001-teams-users-roles.ts";
 import * as signInFailures from "./0002-sign-in-failures.ts";
+import * as catalogueAndIntakes from "./0003-catalogue-and-intakes.ts";
 
 export const migrations = [
   { name: "0001-teams-users-roles", ...teamsUsersRoles },
   { name: "0002-sign-in-failures", ...signInFailures },
+  { name: "0003-catalogue-and-intakes", ...catalogueAndIntakes },
 ];

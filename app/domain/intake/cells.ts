@@ -10,7 +10,7 @@ export type CellReader = (cell: string) => CellResult;
 export interface ReaderContext {
   /** Unit from the column's header, e.g. `mA` from `ic_max [mA]`. */
   headerUnit: string;
-  /** Semicolon, tab and bar files come from locales that write decimal commas. */
+  /** Semicolon files come from locales that write decimal commas, so a comma there is always decimal. */
   decimalComma: boolean;
 }
 

@@ -59,6 +59,13 @@ describe("parsePartsFile", () => {
     ]);
   });
 
+  it("reads every comma as decimal only in semicolon files; elsewhere 1,250 stays ambiguous", () => {
+    const semicolon = parse(HEADER.replaceAll(",", ";"), GOOD.replaceAll(",", ";").replace("100 mA", "1,250 A"));
+    expect(semicolon.rows[0].value.icMaxAmps).toBe(1.25);
+    const tab = parse(HEADER.replaceAll(",", "\t"), GOOD.replaceAll(",", "\t").replace("100 mA", "1,250 A"));
+    expect(tab.problems.map((p) => p.message)).toEqual(['ambiguous: "1,250 A" may use a thousands separator or a decimal comma; write 1250 or 1.250']);
+  });
+
   it("accepts lifecycle labels as the catalogue shows them", () => {
     const { rows } = parse(`${HEADER},lifecycle`, `${GOOD},Not recommended for new designs`);
     expect(rows[0].value.lifecycle).toBe("nrnd");
@@ -96,7 +103,7 @@ describe("parsePartsFile", () => {
 });
 
 // Invented parts with varied values, so the quantity cache does not hide the parsing cost.
-export function makePart(i: number): PartSpec {
+function makePart(i: number): PartSpec {
   const scale = 1 + (i % 997) / 100;
   return {
     manufacturer: `Larkfield Semiconductor ${i % 7}`,

@@ -57,7 +57,7 @@ export function readTable(bytes: Uint8Array, format: IntakeFormat): Table {
   const options = { delimiter, header: false, skipEmptyLines: false, quoteChar: '"' } as const;
   const headerCells = Papa.parse<string[]>(text, { ...options, preview: 1 }).data[0] ?? [];
   const problems: IntakeProblem[] = [];
-  const header = mapHeader(headerCells, format, delimiter !== ",", problems);
+  const header = mapHeader(headerCells, format, delimiter === ";", problems);
   if (header.fatal) return refused(problems);
 
   const eachRecord = (visit: (record: TableRecord) => void) => {

@@ -1,0 +1,62 @@
+// The documentation of one intake file format: every column, its unit, whether it is required, an example.
+
+export interface ColumnDocRow {
+  name: string;
+  label: string;
+  type: string;
+  unit: string;
+  required: string;
+  description: string;
+  example: string;
+  plausible: string;
+}
+
+export function FormatTable({ kind, columns }: { kind: "parts" | "offers"; columns: readonly ColumnDocRow[] }) {
+  return (
+    <div className="overflow-x-auto rounded border border-rule bg-white">
+      <table className="w-full border-collapse text-sm" data-format={kind}>
+        <thead className="bg-paper/60">
+          <tr className="border-b border-rule text-left">
+            <th scope="col" className="px-3 py-2 font-medium">
+              Column
+            </th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Meaning
+            </th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Type
+            </th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Unit
+            </th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Required
+            </th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Example
+            </th>
+            <th scope="col" className="px-3 py-2 font-medium">
+              Plausible
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {columns.map((c) => (
+            <tr key={c.name} className="border-b border-rule/60 align-top last:border-b-0">
+              <td className="whitespace-nowrap px-3 py-1.5 font-mono text-xs leading-5">{c.name}</td>
+              <td className="px-3 py-1.5">
+                <span className="font-medium">{c.label}</span>
+                <span className="block text-ink/70">{c.description}</span>
+              </td>
+              <td className="px-3 py-1.5 text-ink/80">{c.type}</td>
+              <td className="whitespace-nowrap px-3 py-1.5">{c.unit || <span className="text-ink/40">—</span>}</td>
+              <td className="px-3 py-1.5">{c.required === "yes" ? <span className="font-medium">yes</span> : c.required}</td>
+              <td className="whitespace-nowrap px-3 py-1.5 font-mono text-xs leading-5">{c.example}</td>
+              <td className="px-3 py-1.5 text-ink/70">{c.plausible || "—"}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}
