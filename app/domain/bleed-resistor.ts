@@ -1,6 +1,6 @@
 // The base-emitter bleed resistor across a pair's output device: the value, and what it costs in gain.
 import { formatValue } from "./checks/format";
-import { solvePairCurrents, type CompoundTopology } from "./compound";
+import { cornerGainModel, type GainModel, solvePairCurrents, type CompoundTopology, worstGainModel } from "./compound";
 import { roundToSeries, type ESeriesName } from "./e-series";
 import { chooseVbe, type EvaluateOptions } from "./evaluate-part";
 import { hfeAt, worstCaseGain } from "./gain-curve";
@@ -126,6 +126,14 @@ export function highestGainAt(part: PartSpec, icAmps: number, options: EvaluateO
   return hfeAt(part.gainPoints, icAmps, "max") ?? hfeAt(part.gainPoints, icAmps, "typ") ?? worstCaseGain(part.gainPoints, icAmps, options).hfe;
 }
 
+/** highestGainAt as a model with its curve built once. */
+export function highestGainModel(part: PartSpec, options: EvaluateOptions = {}): GainModel {
+  for (const corner of ["max", "typ"] as const) {
+    if (part.gainPoints.some((p) => (corner === "max" ? p.hfeMax : p.hfeTyp) != null)) return cornerGainModel(part.gainPoints, corner);
+  }
+  return worstGainModel(part, options);
+}
+
 /** The bleed resistor for a pair of catalogue parts on a sheet: its lowest current, each part's gain curves and VBE. */
 export function suggestBleedForPair(
   topology: CompoundTopology,
@@ -139,11 +147,8 @@ export function suggestBleedForPair(
     minIcAmps: minIcOf(sheet),
     operatingIcAmps: sheet.operatingIcAmps,
     outputVbeVolts: chooseVbe(output, sheet.operatingIcAmps, "linear").volts,
-    highGain: { driverHfeAt: (ic) => highestGainAt(driver, ic, options), outputHfeAt: (ic) => highestGainAt(output, ic, options) },
-    worstGain: {
-      driverHfeAt: (ic) => worstCaseGain(driver.gainPoints, ic, options).hfe,
-      outputHfeAt: (ic) => worstCaseGain(output.gainPoints, ic, options).hfe,
-    },
+    highGain: { driverHfeAt: highestGainModel(driver, options), outputHfeAt: highestGainModel(output, options) },
+    worstGain: { driverHfeAt: worstGainModel(driver, options), outputHfeAt: worstGainModel(output, options) },
     maxShare: options.maxShare,
     series: options.series,
   });

@@ -1,14 +1,36 @@
 // The best k Darlington and Sziklai pairs in a catalogue, found without walking all N × N pairs.
 import { type BleedSuggestion, DEFAULT_BLEED_SHARE, suggestBleedForPair } from "./bleed-resistor";
 import { judgeAgainstRating } from "./checks/rating";
-import { canPair, compoundBeta, type CompoundEvaluation, type CompoundTopology, COMPOUND_TOPOLOGIES, evaluateCompound, findCompoundExclusions } from "./compound";
+import { checkThermal } from "./checks/thermal";
+import {
+  canPair,
+  compoundBeta,
+  type CompoundEvaluation,
+  type CompoundTopology,
+  COMPOUND_TOPOLOGIES,
+  evaluateCompound,
+  findCompoundExclusions,
+  worstGainModel,
+} from "./compound";
 import { assessDataQuality } from "./data-quality";
-import { findExclusions } from "./evaluate-part";
-import { worstCaseGain } from "./gain-curve";
+import { chooseVbe, findExclusions } from "./evaluate-part";
+import { vceSatAt } from "./gain-curve";
 import type { PartSpec, Polarity } from "./part";
 import { compareText, type CatalogueEntry, type RankingOptions, readSupply, type SupplyFacts } from "./rank";
-import { minIcOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
-import { combineScore, DEFAULT_SCORE_WEIGHTS, FULL_MARGIN, type OrderPrice, type ScoreComponents, scoreCost, scoreDataQuality, scoreMargins, type ScoreWeights, validateWeights } from "./score";
+import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
+import {
+  combineScore,
+  DEFAULT_SCORE_WEIGHTS,
+  FULL_MARGIN,
+  type OrderPrice,
+  type ScoreComponents,
+  scoreCost,
+  scoreDataQuality,
+  scoreMargins,
+  type ScoreWeights,
+  shareOfMargin,
+  validateWeights,
+} from "./score";
 import { TopK } from "./top-k";
 
 export const DEFAULT_TOP_K = 20;
@@ -64,20 +86,29 @@ export function compareRankedCompounds(a: RankedCompound, b: RankedCompound): nu
   );
 }
 
-/** What the search knows about a part before pairing it: supply, data quality, ratings, gain range. */
+/** What the search knows about a part before pairing it: supply, data quality, and bounds on its checks. */
 interface PartFacts<P extends PartSpec> {
   index: number;
   part: P;
   supply: SupplyFacts;
   unitPrice: number | null;
   dataQuality: number;
-  /** The voltage check's share of the margin score, exact: both roles stand the full peak VCE. */
+  /** The voltage check's margin share, exact: both roles stand the full peak VCE. */
   voltageShare: number;
-  voltageFails: boolean;
-  packageAllowed: boolean;
-  /** Highest and lowest worst-case hFE anywhere on its curve (log-log between points, flat beyond). */
+  /** Eligible at all: package allowed, VCEO clears the peak VCE, some gain quoted. */
+  usable: boolean;
+  /** Highest and lowest worst-case hFE anywhere on its curve. */
   maxGain: number;
   minGain: number;
+  /** As an output: upper bounds on its current and thermal margin shares (null: the check gives no margin). */
+  outputCurrentShare: number;
+  outputThermalShare: number | null;
+  /** As an output it must fail: the least current it can carry is above IC max or overheats it. */
+  outputFails: boolean;
+  /** As an output, the pair's VCE(sat) is at least its VBE: the saturation margin share can be no better than this. */
+  outputSaturationShare: number | null;
+  /** As a driver, it quotes a VCE(sat) the pair's saturation check can use (so that check gives a margin). */
+  quotesSaturation: boolean;
 }
 
 interface Settings {
@@ -87,87 +118,185 @@ interface Settings {
   referencePrice: number | null;
   bleed: "suggested" | "none";
   maxBleedShare: number;
+  requiredHfe: number | null;
   options: CompoundSearchOptions;
 }
 
-function clampUnit(value: number): number {
-  return value < 0 ? 0 : value > 1 ? 1 : value;
-}
+type BaseSettings = Omit<Settings, "referencePrice">;
+
+/** Rounding slack so that a bound computed in another order still stays above the score it bounds. */
+const BOUND_SLACK = 1e-9;
 
 function gainRange(part: PartSpec, options: CompoundSearchOptions): { maxGain: number; minGain: number } {
+  // The same model the pair evaluation iterates on; log-log between points and flat beyond has its extremes on the points.
+  const model = worstGainModel(part, options.evaluate);
   let maxGain = 0;
   let minGain = Number.POSITIVE_INFINITY;
-  // The curve is piecewise monotone between quoted points and flat beyond, so its extremes sit on the points.
   for (const point of part.gainPoints) {
-    const hfe = worstCaseGain(part.gainPoints, point.icAmps, options.evaluate).hfe;
+    const hfe = model(point.icAmps);
     maxGain = Math.max(maxGain, hfe);
     minGain = Math.min(minGain, hfe);
   }
   return { maxGain, minGain: Number.isFinite(minGain) ? minGain : 0 };
 }
 
-function collectFacts<P extends PartSpec>(entries: readonly CatalogueEntry<P>[], settings: Omit<Settings, "referencePrice">): PartFacts<P>[] {
-  const { sheet, options } = settings;
+/**
+ * The least current an output carries at a pair current: IC2 ≥ (IC − Ibleed) β2 / (β2 + 1) in both
+ * topologies, with Ibleed ≤ s / (1 − s) × IC(min) for the suggested bleed (it takes at most s at the lowest IC).
+ */
+function leastOutputCurrent(icAmps: number, minGain: number, settings: BaseSettings): number {
+  if (minGain < 1) return 0;
+  const bleedLimit = settings.bleed === "none" ? 0 : (settings.maxBleedShare / (1 - settings.maxBleedShare)) * minIcOf(settings.sheet);
+  return (Math.max(0, icAmps - bleedLimit) * minGain) / (minGain + 1);
+}
+
+function collectFacts<P extends PartSpec>(entries: readonly CatalogueEntry<P>[], settings: BaseSettings): PartFacts<P>[] {
+  const { sheet, options, fullMargin } = settings;
   const anyPolarity: RequirementSheet = { ...sheet, polarity: "any" };
   const peakVce = peakVceOf(sheet);
+  const switching = sheet.mode === "switching";
   return entries.map((entry, index) => {
-    const supply = readSupply(entry.offers, entry.part.lifecycle, sheet.orderQuantity, options.currency ?? null);
-    const voltage = judgeAgainstRating(peakVce, entry.part.vceoVolts, sheet.derating.voltageFraction);
+    const part = entry.part;
+    const supply = readSupply(entry.offers, part.lifecycle, sheet.orderQuantity, options.currency ?? null);
+    const voltage = judgeAgainstRating(peakVce, part.vceoVolts, sheet.derating.voltageFraction);
+    const gains = gainRange(part, options);
+    const current = judgeAgainstRating(leastOutputCurrent(peakIcOf(sheet), gains.minGain, settings), part.icMaxAmps, sheet.derating.currentFraction);
+    // The output's VCE is the operating VCE (linear) or VCE(sat)1 + VBE2 ≥ VBE2 (switching), as evaluateCompound takes it.
+    const thermal = checkThermal({
+      mode: sheet.mode,
+      vceVolts: switching ? chooseVbe(part, sheet.operatingIcAmps, "linear").volts : operatingVceOf(sheet),
+      icAmps: leastOutputCurrent(sheet.operatingIcAmps, gains.minGain, settings),
+      dutyCycle: switching ? sheet.dutyCycle : 1,
+      ambientC: sheet.ambientC,
+      rthJaCPerW: part.rthJaCPerW,
+      rthJcCPerW: part.rthJcCPerW,
+      heatsinkRthCPerW: sheet.heatsinkRthCPerW,
+      tjMaxC: part.tjMaxC,
+      ptotWatts: part.ptotWatts,
+      ptotReference: part.ptotReference,
+      derating: sheet.derating,
+    });
+    const outputVbe = chooseVbe(part, sheet.operatingIcAmps, "linear").volts;
+    const allowed = sheet.allowedSatDropVolts;
     return {
       index,
-      part: entry.part,
+      part,
       supply,
       unitPrice: supply.price?.effectiveUnitPrice ?? null,
-      dataQuality: assessDataQuality(entry.part, options.evaluate).score,
-      voltageShare: clampUnit(voltage.margin / settings.fullMargin),
-      voltageFails: voltage.verdict === "fails",
-      packageAllowed: findExclusions(entry.part, anyPolarity).length === 0,
-      ...gainRange(entry.part, options),
+      dataQuality: assessDataQuality(part, options.evaluate).score,
+      voltageShare: shareOfMargin(voltage.margin, fullMargin),
+      usable: findExclusions(part, anyPolarity).length === 0 && voltage.verdict !== "fails" && gains.maxGain > 0,
+      ...gains,
+      outputCurrentShare: shareOfMargin(current.margin, fullMargin),
+      outputThermalShare: thermal.margin === null ? null : shareOfMargin(thermal.margin, fullMargin),
+      outputFails: current.verdict === "fails" || thermal.verdict === "fails",
+      outputSaturationShare: switching && allowed !== null ? shareOfMargin((allowed - outputVbe) / allowed, fullMargin) : null,
+      quotesSaturation: vceSatAt(part.saturationPoints, sheet.operatingIcAmps) !== null,
     };
   });
-}
-
-/** The most a pair can score: exact cost, stock, lifecycle and data-quality bounds; margin at most the voltage check's. */
-function pairBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, settings: Settings): number {
-  const price = driver.unitPrice === null || output.unitPrice === null ? null : driver.unitPrice + output.unitPrice;
-  return combineScore(
-    {
-      margin: 0.5 * Math.min(driver.voltageShare, output.voltageShare) + 0.5,
-      cost: scoreCost(price, settings.referencePrice),
-      stock: Math.min(driver.supply.stockScore, output.supply.stockScore),
-      lifecycle: Math.min(driver.supply.lifecycleScore, output.supply.lifecycleScore),
-      dataQuality: Math.min(driver.dataQuality, output.dataQuality),
-    },
-    settings.weights,
-  );
-}
-
-/** A part's own bound in one role: the best any partner could make of it (cheapest partner, perfect otherwise). */
-function soloBound(facts: PartFacts<PartSpec>, cheapestPartner: number | null, settings: Settings): number {
-  const price = facts.unitPrice === null || cheapestPartner === null ? null : facts.unitPrice + cheapestPartner;
-  return combineScore(
-    {
-      margin: 0.5 * facts.voltageShare + 0.5,
-      cost: scoreCost(price, settings.referencePrice),
-      stock: facts.supply.stockScore,
-      lifecycle: facts.supply.lifecycleScore,
-      dataQuality: facts.dataQuality,
-    },
-    settings.weights,
-  );
 }
 
 function requiredPairHfe(sheet: RequirementSheet): number | null {
   return sheet.requiredHfe ?? (sheet.mode === "switching" ? sheet.forcedGain : null);
 }
 
+function outputPolarity(topology: CompoundTopology, driverPolarity: Polarity): Polarity {
+  if (topology === "darlington") return driverPolarity;
+  return driverPolarity === "npn" ? "pnp" : "npn";
+}
+
+/** Whether the highest gains the two curves reach can make the β required; a bleed only lowers it. */
+function reaches(topology: CompoundTopology, requiredHfe: number | null, driverGain: number, outputGain: number): boolean {
+  return requiredHfe === null || compoundBeta(topology, driverGain, outputGain) >= requiredHfe;
+}
+
+/** The least current the driver carries at the peak: α IC / (β2 + α), α = β1 / (β1 + 1) at its lowest β1. */
+function leastDriverCurrent(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, peakIcAmps: number): number {
+  const alpha = driver.minGain / (driver.minGain + 1);
+  return (alpha * peakIcAmps) / (output.maxGain + alpha);
+}
+
+interface Pass<P extends PartSpec> {
+  topology: CompoundTopology;
+  drivers: PartFacts<P>[];
+  outputs: PartFacts<P>[];
+}
+
+/** Drivers and outputs per topology and pair polarity, after every prune that needs no partner. */
+function buildPasses<P extends PartSpec>(facts: PartFacts<P>[], settings: BaseSettings, topologies: readonly CompoundTopology[]): Pass<P>[] {
+  const { sheet, requiredHfe } = settings;
+  const polarities: Polarity[] = sheet.polarity === "any" ? ["npn", "pnp"] : [sheet.polarity];
+  const passes: Pass<P>[] = [];
+  for (const topology of topologies) {
+    for (const polarity of polarities) {
+      const drivers = facts.filter((f) => f.usable && f.part.polarity === polarity);
+      const outputs = facts.filter((f) => f.usable && !f.outputFails && f.part.polarity === outputPolarity(topology, polarity));
+      if (drivers.length === 0 || outputs.length === 0) continue;
+      const bestDriverGain = Math.max(...drivers.map((f) => f.maxGain));
+      const bestOutputGain = Math.max(...outputs.map((f) => f.maxGain));
+      passes.push({
+        topology,
+        drivers: drivers.filter((f) => reaches(topology, requiredHfe, f.maxGain, bestOutputGain)),
+        outputs: outputs.filter((f) => reaches(topology, requiredHfe, bestDriverGain, f.maxGain)),
+      });
+    }
+  }
+  return passes.filter((pass) => pass.drivers.length > 0 && pass.outputs.length > 0);
+}
+
+function cheapestPrice(list: readonly PartFacts<PartSpec>[]): number | null {
+  let low: number | null = null;
+  for (const f of list) if (f.unitPrice !== null && (low === null || f.unitPrice < low)) low = f.unitPrice;
+  return low;
+}
+
+/** Margin-share bounds a pair cannot beat: the tightest check governs the margin score. */
+function pairMarginBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, topology: CompoundTopology, settings: Settings): number {
+  const { sheet, requiredHfe, fullMargin } = settings;
+  let least = Math.min(driver.voltageShare, output.voltageShare, output.outputCurrentShare);
+  if (output.outputThermalShare !== null) least = Math.min(least, output.outputThermalShare);
+  const driverCurrent = judgeAgainstRating(leastDriverCurrent(driver, output, peakIcOf(sheet)), driver.part.icMaxAmps, sheet.derating.currentFraction);
+  least = Math.min(least, shareOfMargin(driverCurrent.margin, fullMargin));
+  // VCE(sat) = VCE(sat)1 + VBE2 > VBE2, so the output's VBE alone bounds the saturation margin.
+  if (driver.quotesSaturation && output.outputSaturationShare !== null) least = Math.min(least, output.outputSaturationShare);
+  if (requiredHfe !== null) {
+    const beta = compoundBeta(topology, driver.maxGain, output.maxGain);
+    least = Math.min(least, shareOfMargin((beta - requiredHfe) / beta, fullMargin));
+  }
+  return least;
+}
+
+function scoreBound(margin: number, price: number | null, stock: number, lifecycle: number, dataQuality: number, settings: Settings): number {
+  return combineScore({ margin, cost: scoreCost(price, settings.referencePrice), stock, lifecycle, dataQuality }, settings.weights) + BOUND_SLACK;
+}
+
+function sumPrices(a: number | null, b: number | null): number | null {
+  return a === null || b === null ? null : a + b;
+}
+
+/** A part's bound in one role: the best any partner could make of it (the cheapest partner, perfect otherwise). */
+function soloBound(facts: PartFacts<PartSpec>, role: "driver" | "output", cheapestPartner: number | null, settings: Settings): number {
+  let margin = facts.voltageShare;
+  if (role === "output") {
+    margin = Math.min(margin, facts.outputCurrentShare);
+    if (facts.outputThermalShare !== null) margin = Math.min(margin, facts.outputThermalShare);
+  }
+  return scoreBound(margin, sumPrices(facts.unitPrice, cheapestPartner), facts.supply.stockScore, facts.supply.lifecycleScore, facts.dataQuality, settings);
+}
+
+function pairBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, topology: CompoundTopology, settings: Settings): number {
+  return scoreBound(
+    pairMarginBound(driver, output, topology, settings),
+    sumPrices(driver.unitPrice, output.unitPrice),
+    Math.min(driver.supply.stockScore, output.supply.stockScore),
+    Math.min(driver.supply.lifecycleScore, output.supply.lifecycleScore),
+    Math.min(driver.dataQuality, output.dataQuality),
+    settings,
+  );
+}
+
 /** Evaluates one pair with its bleed resistor and scores it; null when it fails. */
-function scorePair<P extends PartSpec>(
-  topology: CompoundTopology,
-  driver: PartFacts<P>,
-  output: PartFacts<P>,
-  settings: Settings,
-): RankedCompound<P> | null {
+function scorePair<P extends PartSpec>(topology: CompoundTopology, driver: PartFacts<P>, output: PartFacts<P>, settings: Settings): RankedCompound<P> | null {
   const { sheet, options } = settings;
   const bleed =
     settings.bleed === "suggested"
@@ -175,7 +304,7 @@ function scorePair<P extends PartSpec>(
       : null;
   const evaluation = evaluateCompound(topology, driver.part, output.part, sheet, { ...options.evaluate, bleedOhms: bleed?.ohms ?? null });
   if (evaluation.verdict === "fails") return null;
-  const price = driver.unitPrice === null || output.unitPrice === null ? null : driver.unitPrice + output.unitPrice;
+  const price = sumPrices(driver.unitPrice, output.unitPrice);
   const components: ScoreComponents = {
     margin: scoreMargins(evaluation.checks, settings.fullMargin),
     cost: scoreCost(price, settings.referencePrice),
@@ -196,28 +325,48 @@ function scorePair<P extends PartSpec>(
   };
 }
 
+/** Facts, passes and the price that scores 1: the cheapest driver plus the cheapest output of any pass. */
 function settle<P extends PartSpec>(entries: readonly CatalogueEntry<P>[], sheet: RequirementSheet, options: CompoundSearchOptions) {
-  const base = {
+  const base: BaseSettings = {
     sheet,
     weights: validateWeights(options.weights ?? { ...DEFAULT_SCORE_WEIGHTS }),
     fullMargin: options.fullMargin ?? FULL_MARGIN,
     bleed: options.bleed ?? "suggested",
     maxBleedShare: options.maxBleedShare ?? DEFAULT_BLEED_SHARE,
+    requiredHfe: requiredPairHfe(sheet),
     options,
-  } as const;
+  };
+  const topologies = options.topologies ?? COMPOUND_TOPOLOGIES;
   const facts = collectFacts(entries, base);
-  let cheapest: number | null = null;
-  for (const fact of facts) {
-    if (fact.unitPrice !== null && (cheapest === null || fact.unitPrice < cheapest)) cheapest = fact.unitPrice;
+  const passes = buildPasses(facts, base, topologies);
+  let referencePrice: number | null = null;
+  for (const pass of passes) {
+    const price = sumPrices(cheapestPrice(pass.drivers), cheapestPrice(pass.outputs));
+    if (price !== null && (referencePrice === null || price < referencePrice)) referencePrice = price;
   }
-  // A pair costs two parts: twice the catalogue's cheapest part is the price that scores 1.
-  const settings: Settings = { ...base, referencePrice: cheapest === null ? null : 2 * cheapest };
-  return { facts, settings, k: options.k ?? DEFAULT_TOP_K, topologies: options.topologies ?? COMPOUND_TOPOLOGIES };
+  const settings: Settings = { ...base, referencePrice };
+  return { facts, passes, settings, k: options.k ?? DEFAULT_TOP_K, topologies };
 }
 
-function outputPolarity(topology: CompoundTopology, driverPolarity: Polarity): Polarity {
-  if (topology === "darlington") return driverPolarity;
-  return driverPolarity === "npn" ? "pnp" : "npn";
+function resultOf<P extends PartSpec>(
+  options: CompoundSearchOptions,
+  settings: Settings,
+  k: number,
+  ranked: RankedCompound<P>[],
+  pairSpace: number,
+  counts: { considered: number; evaluated: number; failed: number },
+): CompoundSearchResult<P> {
+  return {
+    catalogueVersion: options.catalogueVersion,
+    weights: settings.weights,
+    orderQuantity: settings.sheet.orderQuantity,
+    k,
+    ranked,
+    pairSpace,
+    pairsConsidered: counts.considered,
+    pairsEvaluated: counts.evaluated,
+    pairsFailed: counts.failed,
+  };
 }
 
 /**
@@ -244,33 +393,24 @@ export function rankCompoundsExhaustively<P extends PartSpec>(
     }
   }
   found.sort(compareRankedCompounds);
-  return {
-    catalogueVersion: options.catalogueVersion,
-    weights: settings.weights,
-    orderQuantity: sheet.orderQuantity,
-    k,
-    ranked: found.slice(0, k),
-    pairSpace: facts.length * facts.length * topologies.length,
-    pairsConsidered: evaluated,
-    pairsEvaluated: evaluated,
-    pairsFailed: evaluated - found.length,
-  };
+  const counts = { considered: evaluated, evaluated, failed: evaluated - found.length };
+  return resultOf(options, settings, k, found.slice(0, k), facts.length * facts.length * topologies.length, counts);
 }
 
-interface RoleList<P extends PartSpec> {
-  facts: PartFacts<P>;
+interface Bounded<T> {
+  item: T;
   bound: number;
 }
 
-function sortByBound<P extends PartSpec>(list: RoleList<P>[]): RoleList<P>[] {
-  return list.sort((a, b) => b.bound - a.bound || a.facts.index - b.facts.index);
+function byBound<T extends { index: number }>(list: Bounded<T>[]): Bounded<T>[] {
+  return list.sort((a, b) => b.bound - a.bound || a.item.index - b.item.index);
 }
 
 /**
  * The best k pairs. Prunes before any gain math (polarity per topology, packages, VCEO against the
- * peak VCE, each device's IC max against the least current it can carry, the highest gain the two
- * curves can reach against the gain required), then walks outputs and drivers in falling order of
- * their score bounds, stopping as soon as a bound cannot beat the k-th score kept in the heap.
+ * peak VCE, each device's IC max and the output's heat against the least current it can carry, the
+ * highest gain the two curves can reach against the gain required), then walks outputs and drivers
+ * in falling order of their score bounds, stopping once a bound cannot beat the k-th score kept.
  * Agrees with rankCompoundsExhaustively: a pair is skipped only when it must fail or cannot enter the top k.
  */
 export function searchCompounds<P extends PartSpec>(
@@ -278,77 +418,36 @@ export function searchCompounds<P extends PartSpec>(
   sheet: RequirementSheet,
   options: CompoundSearchOptions,
 ): CompoundSearchResult<P> {
-  const { facts, settings, k, topologies } = settle(entries, sheet, options);
+  const { facts, passes, settings, k, topologies } = settle(entries, sheet, options);
   const heap = new TopK<RankedCompound<P>>(k, compareRankedCompounds);
   const peakIc = peakIcOf(sheet);
-  const minIc = minIcOf(sheet);
-  const requiredHfe = requiredPairHfe(sheet);
-  // The suggested bleed takes at most s of the driver's current at the lowest IC, so Ibleed ≤ s / (1 − s) × IC(min).
-  const bleedLimitAmps = settings.bleed === "none" ? 0 : (settings.maxBleedShare / (1 - settings.maxBleedShare)) * minIc;
-  const usable = facts.filter((f) => f.packageAllowed && !f.voltageFails && f.maxGain > 0);
-  let considered = 0;
-  let evaluated = 0;
-  let failed = 0;
-
-  const pairPolarities: Polarity[] = sheet.polarity === "any" ? ["npn", "pnp"] : [sheet.polarity];
-  const passes: { topology: CompoundTopology; drivers: RoleList<P>[]; output: RoleList<P> }[] = [];
-  for (const topology of topologies) {
-    for (const polarity of pairPolarities) {
-      const driverFacts = usable.filter((f) => f.part.polarity === polarity);
-      const outputFacts = usable.filter((f) => {
-        if (f.part.polarity !== outputPolarity(topology, polarity)) return false;
-        // IC2 ≥ (IC − Ibleed) β2 / (β2 + 1) in both topologies; above IC max the output fails its current check.
-        if (f.minGain >= 1 && ((peakIc - bleedLimitAmps) * f.minGain) / (f.minGain + 1) > f.part.icMaxAmps) return false;
-        return true;
-      });
-      if (driverFacts.length === 0 || outputFacts.length === 0) continue;
-      const bestDriverGain = Math.max(...driverFacts.map((f) => f.maxGain));
-      const bestOutputGain = Math.max(...outputFacts.map((f) => f.maxGain));
-      const cheapest = (list: PartFacts<P>[]) => list.reduce<number | null>((low, f) => (f.unitPrice !== null && (low === null || f.unitPrice < low) ? f.unitPrice : low), null);
-      const cheapestDriver = cheapest(driverFacts);
-      const cheapestOutput = cheapest(outputFacts);
-      const drivers = sortByBound(
-        driverFacts.filter((f) => reaches(topology, requiredHfe, f.maxGain, bestOutputGain)).map((f) => ({ facts: f, bound: soloBound(f, cheapestOutput, settings) })),
-      );
-      for (const f of outputFacts) {
-        if (reaches(topology, requiredHfe, bestDriverGain, f.maxGain)) passes.push({ topology, drivers, output: { facts: f, bound: soloBound(f, cheapestDriver, settings) } });
-      }
-    }
+  const counts = { considered: 0, evaluated: 0, failed: 0 };
+  const slots: { topology: CompoundTopology; output: Bounded<PartFacts<P>>; drivers: Bounded<PartFacts<P>>[] }[] = [];
+  for (const pass of passes) {
+    const cheapestDriver = cheapestPrice(pass.drivers);
+    const cheapestOutput = cheapestPrice(pass.outputs);
+    const drivers = byBound(pass.drivers.map((item) => ({ item, bound: soloBound(item, "driver", cheapestOutput, settings) })));
+    for (const item of pass.outputs) slots.push({ topology: pass.topology, output: { item, bound: soloBound(item, "output", cheapestDriver, settings) }, drivers });
   }
-  passes.sort((a, b) => b.output.bound - a.output.bound || a.output.facts.index - b.output.facts.index || compareText(a.topology, b.topology));
+  slots.sort((a, b) => b.output.bound - a.output.bound || a.output.item.index - b.output.item.index || compareText(a.topology, b.topology));
 
   const kthScore = () => (heap.isFull ? (heap.worst()?.score ?? Number.NEGATIVE_INFINITY) : Number.NEGATIVE_INFINITY);
-  for (const pass of passes) {
-    if (pass.output.bound < kthScore()) break;
-    const output = pass.output.facts;
-    for (const { facts: driver, bound } of pass.drivers) {
+  for (const slot of slots) {
+    if (slot.output.bound < kthScore()) break;
+    const output = slot.output.item;
+    for (const { item: driver, bound } of slot.drivers) {
       if (bound < kthScore()) break;
-      considered += 1;
-      if (!reaches(pass.topology, requiredHfe, driver.maxGain, output.maxGain)) continue;
-      // The driver carries at least α IC / (β2 + α) at the peak, α = β1 / (β1 + 1) at its lowest β1.
-      const alpha = driver.minGain / (driver.minGain + 1);
-      if ((alpha * peakIc) / (output.maxGain + alpha) > driver.part.icMaxAmps) continue;
-      if (pairBound(driver, output, settings) < kthScore()) continue;
-      evaluated += 1;
-      const ranked = scorePair(pass.topology, driver, output, settings);
-      if (ranked === null) failed += 1;
+      counts.considered += 1;
+      if (!reaches(slot.topology, settings.requiredHfe, driver.maxGain, output.maxGain)) continue;
+      if (leastDriverCurrent(driver, output, peakIc) > driver.part.icMaxAmps) continue;
+      // A quoted VCE(sat)1 is above zero, so an output VBE at or above the allowed drop fails saturation.
+      if (driver.quotesSaturation && output.outputSaturationShare !== null && output.outputSaturationShare <= 0) continue;
+      if (pairBound(driver, output, slot.topology, settings) < kthScore()) continue;
+      counts.evaluated += 1;
+      const ranked = scorePair(slot.topology, driver, output, settings);
+      if (ranked === null) counts.failed += 1;
       else heap.push(ranked);
     }
   }
-  return {
-    catalogueVersion: options.catalogueVersion,
-    weights: settings.weights,
-    orderQuantity: sheet.orderQuantity,
-    k,
-    ranked: heap.toSortedArray(),
-    pairSpace: facts.length * facts.length * topologies.length,
-    pairsConsidered: considered,
-    pairsEvaluated: evaluated,
-    pairsFailed: failed,
-  };
-}
-
-/** Whether the highest gains the two curves reach can make the pair's β required; bleed only lowers it. */
-function reaches(topology: CompoundTopology, requiredHfe: number | null, driverGain: number, outputGain: number): boolean {
-  return requiredHfe === null || compoundBeta(topology, driverGain, outputGain) >= requiredHfe;
+  return resultOf(options, settings, k, heap.toSortedArray(), facts.length * facts.length * topologies.length, counts);
 }

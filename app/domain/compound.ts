@@ -10,8 +10,8 @@ import { checkThermal } from "./checks/thermal";
 import { checkVoltage } from "./checks/voltage";
 import { assessDataQuality } from "./data-quality";
 import { chooseVbe, DEFAULT_VCE_SAT_VOLTS, type EvaluateOptions, findExclusions } from "./evaluate-part";
-import { type GainEstimate, type SaturationEstimate, vceSatAt, worstCaseGain } from "./gain-curve";
-import type { PartSpec, Polarity } from "./part";
+import { type GainCorner, type GainEstimate, hfeAt, type SaturationEstimate, vceSatAt, type WorstCaseGainOptions, worstCaseGain } from "./gain-curve";
+import type { GainPoint, PartSpec, Polarity } from "./part";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
 
 export const COMPOUND_TOPOLOGIES = ["darlington", "sziklai"] as const;
@@ -164,6 +164,40 @@ export function solvePairCurrents(input: PairCurrentsInput): PairCurrents {
   };
 }
 
+/** hFE against IC with the curve built once, for use inside the pair iteration. */
+export type GainModel = (icAmps: number) => number;
+
+/**
+ * One corner's curve, scaled, as a function of IC: log-log between the quoted currents, flat beyond,
+ * as hfeAt draws it. Sampling hfeAt at every quoted current keeps the same line (a node on a log-log
+ * segment leaves it straight), so the curve is read once instead of at every iteration step.
+ */
+export function cornerGainModel(points: GainPoint[], corner: GainCorner, scale = 1): GainModel {
+  const currents = [...new Set(points.map((p) => p.icAmps).filter((ic) => ic > 0))].sort((a, b) => a - b);
+  const logIc = currents.map(Math.log);
+  const logHfe = currents.map((ic) => Math.log((hfeAt(points, ic, corner) ?? 0) * scale));
+  if (currents.length === 0 || !logHfe.every(Number.isFinite)) return () => 0;
+  const last = currents.length - 1;
+  return (icAmps) => {
+    if (icAmps <= currents[0]) return Math.exp(logHfe[0]);
+    if (icAmps >= currents[last]) return Math.exp(logHfe[last]);
+    let upper = 1;
+    while (currents[upper] < icAmps) upper += 1;
+    const t = (Math.log(icAmps) - logIc[upper - 1]) / (logIc[upper] - logIc[upper - 1]);
+    return Math.exp(logHfe[upper - 1] + t * (logHfe[upper] - logHfe[upper - 1]));
+  };
+}
+
+/** The worst-case hFE of a part as worstCaseGain gives it (min, else typ or max derated), curve built once. */
+export function worstGainModel(part: PartSpec, options: WorstCaseGainOptions = {}): GainModel {
+  const first = part.gainPoints[0];
+  if (first === undefined) return () => 0;
+  const estimate = worstCaseGain(part.gainPoints, first.icAmps, options);
+  if (estimate.source === "none") return () => 0;
+  const corner: GainCorner = estimate.source === "min" ? "min" : estimate.source === "typ-derated" ? "typ" : "max";
+  return cornerGainModel(part.gainPoints, corner, estimate.typToMinFactor ?? 1);
+}
+
 /** The polarity a pair acts with: its driver's, in both topologies. */
 export function compoundPolarity(driver: PartSpec): Polarity {
   return driver.polarity;
@@ -238,24 +272,6 @@ const TOPOLOGY_BETA_FORMULA: Record<CompoundTopology, string> = {
   sziklai: "β = β1 (β2 + 1) without bleed; with bleed β = IC / IB, IC1 = IB2 + VBE2 / Rbleed",
 };
 
-function solveAt(
-  topology: CompoundTopology,
-  driver: PartSpec,
-  output: PartSpec,
-  icAmps: number,
-  bleedOhms: number | null,
-  outputVbeVolts: number,
-  options: EvaluateOptions,
-): PairCurrents {
-  return solvePairCurrents({
-    topology,
-    pairIcAmps: icAmps,
-    bleedOhms,
-    outputVbeVolts,
-    driverHfeAt: (ic) => worstCaseGain(driver.gainPoints, ic, options).hfe,
-    outputHfeAt: (ic) => worstCaseGain(output.gainPoints, ic, options).hfe,
-  });
-}
 
 /** The pair's gain as one estimate, so the single-device gain check can judge it. */
 function pairGainEstimate(currents: PairCurrents, driverGain: GainEstimate, outputGain: GainEstimate): GainEstimate {
@@ -332,7 +348,10 @@ export function evaluateCompound<P extends PartSpec>(
   const peakVceVolts = peakVceOf(sheet);
   // The output is never saturated in either pair, so its VBE is VBE(on) even when switching.
   const outputVbe = chooseVbe(output, icAmps, "linear");
-  const solve = (current: number, ohms: number | null) => solveAt(topology, driver, output, current, ohms, outputVbe.volts, options);
+  const driverHfeAt = worstGainModel(driver, options);
+  const outputHfeAt = worstGainModel(output, options);
+  const solve = (current: number, ohms: number | null) =>
+    solvePairCurrents({ topology, pairIcAmps: current, bleedOhms: ohms, outputVbeVolts: outputVbe.volts, driverHfeAt, outputHfeAt });
 
   const operating = solve(icAmps, bleedOhms);
   const peak = peakIcAmps === icAmps ? operating : solve(peakIcAmps, bleedOhms);

@@ -1,6 +1,6 @@
 // A ranking of single parts against a requirement sheet: scored fits and marginals, and failures with reasons.
 import type { CheckResult, FlagName, Verdict } from "./check-result";
-import { type EvaluateOptions, evaluatePart, type PartEvaluation } from "./evaluate-part";
+import { type EvaluateOptions, evaluatePart, findExclusions, type PartEvaluation } from "./evaluate-part";
 import type { Lifecycle, Offer, PartSpec } from "./part";
 import type { RequirementSheet } from "./requirement";
 import {
@@ -117,11 +117,13 @@ export function rankParts<P extends PartSpec>(
   const excluded: ExcludedCandidate<P>[] = [];
   let referencePrice: number | null = null;
   for (const entry of entries) {
-    const evaluation = evaluatePart(entry.part, sheet, options.evaluate);
-    if (evaluation.excludedBy.length > 0) {
-      excluded.push({ part: entry.part, reasons: evaluation.excludedBy });
+    // Polarity and package rule a part out before any check, so its evaluation is never built.
+    const exclusions = findExclusions(entry.part, sheet);
+    if (exclusions.length > 0) {
+      excluded.push({ part: entry.part, reasons: exclusions });
       continue;
     }
+    const evaluation = evaluatePart(entry.part, sheet, options.evaluate);
     if (evaluation.verdict === "fails") {
       failing.push({ part: entry.part, reasons: failureReasons(evaluation.checks), flags: evaluation.flags, evaluation });
       continue;

@@ -116,7 +116,8 @@ const UP = [
      editor_id uuid REFERENCES users (id),
      before jsonb,
      after jsonb,
-     created_at timestamptz NOT NULL DEFAULT now(),
+     -- clock_timestamp, not now(): writers wait for the catalogue lock, and history is ordered by when they wrote.
+     created_at timestamptz NOT NULL DEFAULT clock_timestamp(),
      CHECK ((action = 'edit') = (intake_id IS NULL))
    )`,
   `CREATE INDEX part_revisions_part ON part_revisions (part_id, id)`,
@@ -130,7 +131,7 @@ const UP = [
      intake_id uuid NOT NULL REFERENCES intakes (id) ON DELETE CASCADE,
      before jsonb,
      after jsonb,
-     created_at timestamptz NOT NULL DEFAULT now()
+     created_at timestamptz NOT NULL DEFAULT clock_timestamp()
    )`,
   `CREATE INDEX offer_revisions_part ON offer_revisions (part_id, id)`,
   `CREATE INDEX offer_revisions_intake ON offer_revisions (intake_id)`,

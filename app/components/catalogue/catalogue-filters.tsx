@@ -288,7 +288,7 @@ export function CatalogueFilters({
           Clear all
         </Link>
         <details className="ml-auto text-sm">
-          <summary className="cursor-pointer select-none rounded border border-rule px-3 py-1 hover:bg-paper">Columns ({visible.length})</summary>
+          <summary className="cursor-pointer select-none rounded border border-rule px-3 py-1 hover:bg-paper">{`Columns (${visible.length})`}</summary>
           <div className="mt-2 grid grid-cols-2 gap-x-4 gap-y-1 rounded border border-rule bg-white p-3 sm:grid-cols-3">
             {PART_COLUMNS.map((c) => (
               <label key={c.id} className="flex items-center gap-2">

@@ -51,7 +51,7 @@ function partHref(row: CatalogueRow, query: PartListQuery): string {
 function cellFor(column: PartColumn, query: PartListQuery, showFlagsInline: boolean): ColumnDef<CatalogueRow>["cell"] {
   switch (column.id) {
     case "manufacturer":
-      return ({ row }) => row.original.manufacturer;
+      return ({ row }) => <span className="whitespace-nowrap">{row.original.manufacturer}</span>;
     case "partNumber":
       return ({ row }) => (
         <span className="flex flex-wrap items-baseline gap-x-2 gap-y-0.5">
@@ -226,7 +226,7 @@ export function Pager({ query, total }: { query: PartListQuery; total: number })
     <nav aria-label="Pages" className="flex flex-wrap items-center justify-between gap-3 text-sm">
       <p className="tabular-nums" data-testid="result-count">
         {total === 0 ? "No parts" : `${first}–${last} of ${formatCount(total)} part${total === 1 ? "" : "s"}`}
-        {pages > 1 ? <span className="text-ink/60"> · page {query.page} of {pages}</span> : null}
+        {pages > 1 ? <span className="text-ink/60">{` · page ${query.page} of ${pages}`}</span> : null}
       </p>
       {pages > 1 ? (
         <div className="flex items-center gap-1">

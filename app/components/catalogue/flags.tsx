@@ -39,14 +39,14 @@ export function FlagTags({ flags }: { flags: readonly string[] }) {
 }
 
 /** Each flag with its explanation, as the part page lists them. */
-export function FlagList({ flags }: { flags: readonly string[] }) {
+export function FlagList({ flags, notes }: { flags: readonly string[]; notes?: readonly string[] }) {
   if (flags.length === 0) return <p className="text-sm text-ink/70">No data-quality findings: the datasheet values are complete.</p>;
   return (
     <ul className="space-y-1.5">
-      {flags.map((flag) => (
+      {flags.map((flag, i) => (
         <li key={flag} className="flex items-baseline gap-3 text-sm">
           <FlagTag flag={flag} />
-          <span>{FLAG_EXPLANATIONS[flag] ?? "A finding on this part's data."}</span>
+          <span>{notes?.[i] ?? FLAG_EXPLANATIONS[flag] ?? "A finding on this part's data."}</span>
         </li>
       ))}
     </ul>

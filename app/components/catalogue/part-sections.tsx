@@ -252,6 +252,8 @@ export function OffersTable({ offers }: { offers: readonly ShownOffer[] }) {
 export interface ShownRevision {
   id: string;
   createdAt: string | Date;
+  /** rollback: the values restored when the intake named in `source` was rolled back. */
+  action?: "intake" | "rollback" | "edit";
   source: { kind: "intake"; intakeId: string; fileName: string } | { kind: "edit"; editorName: string };
   changes: Array<{ field: string; before: unknown; after: unknown }>;
 }
@@ -266,19 +268,24 @@ export function RevisionHistory({ revisions }: { revisions: readonly ShownRevisi
             <span className="tabular-nums">{formatWhen(r.createdAt)}</span>
             {r.source.kind === "intake" ? (
               <span>
-                intake{" "}
+                {r.action === "rollback" ? "restored by rolling back intake " : "intake "}
                 <Link to={`/intakes/${r.source.intakeId}`} className="text-signal underline">
                   {r.source.fileName}
                 </Link>
               </span>
             ) : (
-              <span>corrected by {r.source.editorName}</span>
+              <span>{`corrected by ${r.source.editorName}`}</span>
             )}
-            <span className="text-ink/60">
-              {r.changes.length} field{r.changes.length === 1 ? "" : "s"}
-            </span>
+            <span className="text-ink/60">{`${r.changes.length} field${r.changes.length === 1 ? "" : "s"}`}</span>
           </div>
-          <BeforeAfter fields={r.changes} />
+          {r.changes.length > 0 && r.changes.every((c) => c.before === null || c.before === undefined) ? (
+            <details>
+              <summary className="cursor-pointer px-3 py-1.5 text-sm text-signal">{`Created: show the ${r.changes.length} values it was given`}</summary>
+              <BeforeAfter fields={r.changes} />
+            </details>
+          ) : (
+            <BeforeAfter fields={r.changes} />
+          )}
         </li>
       ))}
     </ol>

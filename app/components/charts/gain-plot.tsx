@@ -191,7 +191,7 @@ export function GainPlot({
             operating point (worst case)
           </span>
         ) : null}
-        {otherTemps > 0 ? <span>{otherTemps} point{otherTemps === 1 ? "" : "s"} at other temperatures not plotted</span> : null}
+        {otherTemps > 0 ? <span>{`${otherTemps} point${otherTemps === 1 ? "" : "s"} at other temperatures not plotted`}</span> : null}
       </figcaption>
     </figure>
   );

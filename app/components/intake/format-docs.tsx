@@ -44,15 +44,15 @@ export function FormatTable({ kind, columns }: { kind: "parts" | "offers"; colum
           {columns.map((c) => (
             <tr key={c.name} className="border-b border-rule/60 align-top last:border-b-0">
               <td className="whitespace-nowrap px-3 py-1.5 font-mono text-xs leading-5">{c.name}</td>
-              <td className="px-3 py-1.5">
+              <td className="min-w-64 px-3 py-1.5">
                 <span className="font-medium">{c.label}</span>
                 <span className="block text-ink/70">{c.description}</span>
               </td>
-              <td className="px-3 py-1.5 text-ink/80">{c.type}</td>
+              <td className="min-w-28 px-3 py-1.5 text-ink/80">{c.type}</td>
               <td className="whitespace-nowrap px-3 py-1.5">{c.unit || <span className="text-ink/40">—</span>}</td>
-              <td className="px-3 py-1.5">{c.required === "yes" ? <span className="font-medium">yes</span> : c.required}</td>
-              <td className="whitespace-nowrap px-3 py-1.5 font-mono text-xs leading-5">{c.example}</td>
-              <td className="px-3 py-1.5 text-ink/70">{c.plausible || "—"}</td>
+              <td className="min-w-28 px-3 py-1.5">{c.required === "yes" ? <span className="font-medium">yes</span> : c.required}</td>
+              <td className="max-w-48 break-all px-3 py-1.5 font-mono text-xs leading-5">{c.example}</td>
+              <td className="min-w-36 px-3 py-1.5 text-ink/70">{c.plausible || "—"}</td>
             </tr>
           ))}
         </tbody>

@@ -1,6 +1,6 @@
 // Presentational pieces of the intake pages: state, counts, problems, changes.
 import { Link } from "react-router";
-import { showValue } from "#app/components/ui/format.ts";
+import { fieldLabel, formatFieldValue, inFieldOrder } from "#app/components/catalogue/field-display.ts";
 import { STATE_LABELS, type IntakeCounts, type IntakeState, type RowChange, type ShownProblem } from "./types.ts";
 
 const STATE_TONES: Record<IntakeState, string> = {
@@ -39,14 +39,16 @@ export function IntakeCountsBar({ counts }: { counts: IntakeCounts }) {
   );
 }
 
-/** Compact counts for the intake list: `3 new · 2 changed · 1 rejected`. */
+/** Compact counts for the intake list, zeros left out: `87 new · 4 rejected`. */
 export function CountsInline({ counts }: { counts: IntakeCounts }) {
+  const shown = COUNT_ITEMS.filter((item) => counts[item.key] > 0);
+  if (shown.length === 0) return <span className="text-ink/50">no rows</span>;
   return (
     <span className="tabular-nums">
-      {COUNT_ITEMS.map((item, i) => (
-        <span key={item.key} className={counts[item.key] > 0 ? item.tone : "text-ink/40"}>
+      {shown.map((item, i) => (
+        <span key={item.key} className={`whitespace-nowrap ${item.tone}`}>
           {i > 0 ? " · " : ""}
-          {counts[item.key]} {item.label}
+          {`${counts[item.key]} ${item.label}`}
         </span>
       ))}
     </span>
@@ -232,7 +234,7 @@ export function ChangeList({ changes, kind }: { changes: readonly RowChange[]; k
                   <td className="px-3 py-1.5">{c.manufacturer}</td>
                   <td className="px-3 py-1.5 font-medium">{c.partNumber}</td>
                   {kind === "offers" ? (
-                    <td className="px-3 py-1.5 text-ink/80">{c.fields.map((f) => `${f.field} ${showValue(f.after)}`).join(" · ")}</td>
+                    <td className="px-3 py-1.5 text-ink/80">{c.fields.map((f) => `${fieldLabel(f.field)} ${formatFieldValue(f.field, f.after)}`).join(" · ")}</td>
                   ) : null}
                 </tr>
               ))}
@@ -242,8 +244,9 @@ export function ChangeList({ changes, kind }: { changes: readonly RowChange[]; k
       </section>
       {unchanged > 0 ? (
         <p className="text-sm text-ink/70">
-          {unchanged} {noun}
-          {unchanged === 1 ? "" : "s"} in the file match the catalogue exactly and stay as they are.
+          {unchanged === 1
+            ? `1 ${noun} in the file matches the catalogue exactly and stays as it is.`
+            : `${unchanged} ${noun}s in the file match the catalogue exactly and stay as they are.`}
         </p>
       ) : null}
     </div>
@@ -269,14 +272,14 @@ export function BeforeAfter({ fields }: { fields: ReadonlyArray<{ field: string;
         </tr>
       </thead>
       <tbody>
-        {fields.map((f) => (
+        {inFieldOrder(fields).map((f) => (
           <tr key={f.field} className="border-t border-rule/60 align-top">
-            <td className="px-3 py-1.5 font-mono text-xs leading-5">{f.field}</td>
-            <td className="px-3 py-1.5 text-ink/70 line-through decoration-ink/30">{showValue(f.before)}</td>
+            <td className="px-3 py-1.5 font-medium">{fieldLabel(f.field)}</td>
+            <td className="px-3 py-1.5 text-ink/70">{formatFieldValue(f.field, f.before)}</td>
             <td className="px-1 py-1.5 text-ink/50" aria-label="becomes">
               →
             </td>
-            <td className="px-3 py-1.5 font-medium">{showValue(f.after)}</td>
+            <td className="px-3 py-1.5">{formatFieldValue(f.field, f.after)}</td>
           </tr>
         ))}
       </tbody>

@@ -229,7 +229,7 @@ function DropZoneText({ dragging, maxBytes }: { dragging: boolean; maxBytes: num
     <>
       <p className="text-base font-medium">{dragging ? "Drop the file here" : "Drop a CSV file here, or click to choose one"}</p>
       <p className="mt-1 text-sm text-ink/60">
-        Comma, semicolon or tab separated, UTF-8; up to {formatBytes(maxBytes)}.
+        {`Comma, semicolon or tab separated, UTF-8; up to ${formatBytes(maxBytes)}.`}
       </p>
     </>
   );

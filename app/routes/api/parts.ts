@@ -1,8 +1,13 @@
-import { requireRole, requireUser } from "#app/lib/auth.server.ts";
+import type { Route } from "./+types/parts";
+import { listParts } from "#app/data/parts.server.ts";
+import { requireUser } from "#app/lib/auth.server.ts";
+import { parsePartListQuery } from "#app/lib/catalogue-query.ts";
 
-export async function loader({ request }: { request: Request }) {
+export async function loader({ request }: Route.LoaderArgs) {
   await requireUser(request);
-  void requireRole;
-  void requireUser;
-  return Response.json({ error: { code: "pending", message: "Being built.", details: null } }, { status: 501 });
+  const parsed = parsePartListQuery(new URL(request.url).searchParams);
+  if (!parsed.ok) {
+    return Response.json({ error: { code: "invalid-query", message: "Some filters are not valid.", details: parsed.fieldErrors } }, { status: 400 });
+  }
+  return Response.json({ query: parsed.query, ...(await listParts(parsed.query)) });
 }

@@ -1,0 +1,225 @@
+// Shared SQL for the catalogue tables: part rows <-> PartSpec, bulk writes in one statement, the version row.
+import type { Transaction } from "sequelize";
+import { QueryTypes } from "sequelize";
+import type { CataloguePart, GainPoint, Offer, PartSpec, SaturationPoint } from "#app/domain/part.ts";
+import { partKey } from "#app/domain/part.ts";
+import { db } from "#app/lib/db.server.ts";
+
+/** PartSpec field -> parts column and its PostgreSQL type, in PartSpec order. */
+export const PART_FIELD_COLUMNS: ReadonlyArray<[keyof PartSpec, string, string]> = [
+  ["manufacturer", "manufacturer", "text"],
+  ["partNumber", "part_number", "text"],
+  ["polarity", "polarity", "text"],
+  ["packageName", "package_name", "text"],
+  ["configuration", "configuration", "text"],
+  ["vceoVolts", "vceo_volts", "float8"],
+  ["vcboVolts", "vcbo_volts", "float8"],
+  ["veboVolts", "vebo_volts", "float8"],
+  ["icMaxAmps", "ic_max_amps", "float8"],
+  ["ptotWatts", "ptot_watts", "float8"],
+  ["ptotReference", "ptot_reference", "text"],
+  ["tjMaxC", "tj_max_c", "float8"],
+  ["rthJaCPerW", "rth_ja_c_per_w", "float8"],
+  ["rthJcCPerW", "rth_jc_c_per_w", "float8"],
+  ["gainPoints", "gain_points", "jsonb"],
+  ["saturationPoints", "saturation_points", "jsonb"],
+  ["vbeOnVolts", "vbe_on_volts", "float8"],
+  ["ftHz", "ft_hz", "float8"],
+  ["cobFarads", "cob_farads", "float8"],
+  ["earlyVolts", "early_volts", "float8"],
+  ["lifecycle", "lifecycle", "text"],
+  ["datasheetUrl", "datasheet_url", "text"],
+  ["datasheetRevisionDate", "datasheet_revision_date", "date"],
+];
+
+export const PART_SELECT = [
+  "p.id",
+  ...PART_FIELD_COLUMNS.map(([, column, type]) => (type === "date" ? `p.${column}::text AS ${column}` : `p.${column}`)),
+].join(", ");
+
+export type PartRow = Record<string, unknown> & { id: string };
+
+/** Points are kept sorted by IC, the order the gain curve and the part page read them in. */
+export function sortedPoints<P extends GainPoint | SaturationPoint>(points: readonly P[]): P[] {
+  return [...points].sort((a, b) => a.icAmps - b.icAmps);
+}
+
+export function rowToPart(row: PartRow): CataloguePart {
+  const spec = {} as Record<string, unknown>;
+  for (const [field, column] of PART_FIELD_COLUMNS) spec[field] = row[column] ?? null;
+  return { id: row.id, ...(spec as unknown as PartSpec) };
+}
+
+/** A spec with its point lists sorted, as stored and as recorded in revisions. */
+export function normaliseSpec(spec: PartSpec): PartSpec {
+  return { ...spec, gainPoints: sortedPoints(spec.gainPoints), saturationPoints: sortedPoints(spec.saturationPoints) };
+}
+
+export function specOf(part: CataloguePart): PartSpec {
+  const { id: _id, ...spec } = part;
+  return spec;
+}
+
+function cellFor(type: string, value: unknown): unknown {
+  if (value === undefined || value === null) return null;
+  return type === "jsonb" ? JSON.stringify(value) : value;
+}
+
+// Arrays beyond this many rows are sent in several statements, to keep each message to PostgreSQL moderate.
+const CHUNK_ROWS = 20_000;
+
+/**
+ * Inserts many rows in one statement per chunk: one array parameter per column, expanded by unnest.
+ * Much faster than one INSERT per row, and needs no extra package.
+ */
+export async function insertMany(
+  table: string,
+  columns: ReadonlyArray<[name: string, type: string]>,
+  rows: ReadonlyArray<readonly unknown[]>,
+  transaction: Transaction,
+  suffix = "",
+): Promise<void> {
+  for (let start = 0; start < rows.length; start += CHUNK_ROWS) {
+    const chunk = rows.slice(start, start + CHUNK_ROWS);
+    const arrays = columns.map(([, type], c) => chunk.map((row) => cellFor(type, row[c])));
+    const select = columns.map(([, type], c) => `$${c + 1}::${type}[]`).join(", ");
+    const names = columns.map(([name]) => name).join(", ");
+    await db().sequelize.query(`INSERT INTO ${table} (${names}) SELECT * FROM unnest(${select}) ${suffix}`, {
+      bind: arrays,
+      transaction,
+      type: QueryTypes.INSERT,
+    });
+  }
+}
+
+const PART_WRITE_COLUMNS: Array<[string, string]> = [["id", "uuid"], ...PART_FIELD_COLUMNS.map(([, column, type]) => [column, type] as [string, string])];
+
+function partCells(id: string, spec: PartSpec): unknown[] {
+  const normal = normaliseSpec(spec);
+  return [id, ...PART_FIELD_COLUMNS.map(([field]) => normal[field])];
+}
+
+export async function insertParts(parts: ReadonlyArray<{ id: string; spec: PartSpec }>, transaction: Transaction): Promise<void> {
+  await insertMany(
+    "parts",
+    PART_WRITE_COLUMNS,
+    parts.map((p) => partCells(p.id, p.spec)),
+    transaction,
+  );
+}
+
+/** Overwrites every field of the given parts with their new specs. */
+export async function updateParts(parts: ReadonlyArray<{ id: string; spec: PartSpec }>, transaction: Transaction): Promise<void> {
+  for (let start = 0; start < parts.length; start += CHUNK_ROWS) {
+    const chunk = parts.slice(start, start + CHUNK_ROWS).map((p) => partCells(p.id, p.spec));
+    const arrays = PART_WRITE_COLUMNS.map(([, type], c) => chunk.map((row) => cellFor(type, row[c])));
+    const select = PART_WRITE_COLUMNS.map(([, type], c) => `$${c + 1}::${type}[]`).join(", ");
+    const aliases = PART_WRITE_COLUMNS.map(([name]) => name).join(", ");
+    const sets = PART_FIELD_COLUMNS.map(([, column]) => `${column} = u.${column}`).join(", ");
+    await db().sequelize.query(`UPDATE parts p SET ${sets}, updated_at = now() FROM unnest(${select}) AS u(${aliases}) WHERE p.id = u.id`, {
+      bind: arrays,
+      transaction,
+    });
+  }
+}
+
+export async function deleteParts(ids: readonly string[], transaction: Transaction): Promise<void> {
+  if (ids.length === 0) return;
+  await db().sequelize.query(`DELETE FROM parts WHERE id = ANY($1::uuid[])`, { bind: [ids], transaction });
+}
+
+export interface PartRevisionInsert {
+  partId: string;
+  action: "intake" | "rollback" | "edit";
+  intakeId: string | null;
+  editorId: string | null;
+  before: PartSpec | null;
+  after: PartSpec | null;
+}
+
+export async function insertPartRevisions(revisions: readonly PartRevisionInsert[], transaction: Transaction): Promise<void> {
+  await insertMany(
+    "part_revisions",
+    [
+      ["part_id", "uuid"],
+      ["action", "text"],
+      ["intake_id", "uuid"],
+      ["editor_id", "uuid"],
+      ["before", "jsonb"],
+      ["after", "jsonb"],
+    ],
+    revisions.map((r) => [r.partId, r.action, r.intakeId, r.editorId, r.before && normaliseSpec(r.before), r.after && normaliseSpec(r.after)]),
+    transaction,
+  );
+}
+
+/** Parts of the catalogue with these identities (manufacturer + part number, trimmed, any case), by part key. */
+export async function findPartsByKeys(
+  identities: ReadonlyArray<{ manufacturer: string; partNumber: string }>,
+  transaction?: Transaction,
+): Promise<Map<string, CataloguePart>> {
+  const found = new Map<string, CataloguePart>();
+  for (let start = 0; start < identities.length; start += CHUNK_ROWS) {
+    const chunk = identities.slice(start, start + CHUNK_ROWS);
+    const rows = await db().sequelize.query<PartRow>(
+      `SELECT ${PART_SELECT} FROM parts p
+       JOIN unnest($1::text[], $2::text[]) AS k(m, n) ON lower(trim(p.manufacturer)) = k.m AND lower(trim(p.part_number)) = k.n`,
+      {
+        bind: [chunk.map((i) => i.manufacturer.trim().toLowerCase()), chunk.map((i) => i.partNumber.trim().toLowerCase())],
+        type: QueryTypes.SELECT,
+        transaction,
+      },
+    );
+    for (const row of rows) {
+      const part = rowToPart(row);
+      found.set(partKey(part.manufacturer, part.partNumber), part);
+    }
+  }
+  return found;
+}
+
+export type OfferRowSql = {
+  id: string;
+  part_id: string;
+  supplier: string;
+  supplier_sku: string | null;
+  stock: number;
+  minimum_order: number;
+  order_multiple: number;
+  price_breaks: Offer["priceBreaks"];
+  currency: string;
+  lead_time_days: number | null;
+  as_of: string;
+};
+
+export const OFFER_SELECT =
+  "o.id, o.part_id, o.supplier, o.supplier_sku, o.stock, o.minimum_order, o.order_multiple, o.price_breaks, o.currency, o.lead_time_days, o.as_of::text AS as_of";
+
+export function rowToOffer(row: OfferRowSql): Offer & { id: string } {
+  return {
+    id: row.id,
+    supplier: row.supplier,
+    supplierSku: row.supplier_sku,
+    stock: Number(row.stock),
+    minimumOrder: Number(row.minimum_order),
+    orderMultiple: Number(row.order_multiple),
+    priceBreaks: [...row.price_breaks].sort((a, b) => a.quantity - b.quantity),
+    currency: row.currency,
+    leadTimeDays: row.lead_time_days === null ? null : Number(row.lead_time_days),
+    asOf: row.as_of,
+  };
+}
+
+/** Locks the catalogue for writing (every commit, rollback and edit takes it first, so they run one at a time). */
+export async function lockCatalogue(transaction: Transaction): Promise<void> {
+  await db().sequelize.query(`SELECT version FROM catalogue_version WHERE id = 1 FOR UPDATE`, { transaction, type: QueryTypes.SELECT });
+}
+
+export async function bumpCatalogueVersion(transaction: Transaction): Promise<void> {
+  await db().sequelize.query(`UPDATE catalogue_version SET version = version + 1, changed_at = clock_timestamp() WHERE id = 1`, { transaction });
+}
+
+export async function readCatalogueVersion(): Promise<number> {
+  const [row] = await db().sequelize.query<{ version: string }>(`SELECT version FROM catalogue_version WHERE id = 1`, { type: QueryTypes.SELECT });
+  return Number(row?.version ?? 0);
+}

@@ -1,0 +1,114 @@
+// The librarian's journey in a real browser: drop a messy CSV, read the problems, commit,
+// then find a committed part in the catalogue and see its hFE plot.
+import path from "node:path";
+import { afterAll, beforeAll, expect, inject, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { artifactPath, launchBrowser } from "../setup/browser.ts";
+import { signInCodeFrom, waitForMail } from "../setup/mail-catcher.ts";
+
+const MESSY_FILE = path.resolve(import.meta.dirname, "../../fixtures/demo/parts-messy.csv");
+const LIBRARIAN = "librarian@larkfield.example.com";
+
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function signIn(page: Page, email: string): Promise<void> {
+  await page.goto(`${inject("appUrl")}/sign-in`);
+  const since = Date.now();
+  await page.getByLabel("E-mail address").fill(email);
+  await page.getByRole("button", { name: "Send me a code" }).click();
+  await page.waitForURL("**/sign-in/verify");
+  const code = signInCodeFrom(await waitForMail(inject("mailDir"), email, since));
+  await page.getByLabel("Code").fill(code);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => url.pathname === "/");
+}
+
+it("a librarian drops a messy parts file, reads its problems, commits it and finds a new part with its gain plot", async () => {
+  const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+  const pageErrors: string[] = [];
+  page.on("pageerror", (error) => pageErrors.push(error.message));
+  page.on("console", (message) => {
+    if (message.type() === "error") pageErrors.push(message.text());
+  });
+
+  await signIn(page, LIBRARIAN);
+
+  // The drop zone's own input exists once the page has hydrated.
+  await page.goto(`${inject("appUrl")}/intakes/new`);
+  const input = page.getByTestId("drop-zone-input");
+  await input.waitFor({ state: "attached" });
+  await page.screenshot({ path: artifactPath("intake-new.png"), fullPage: true });
+  await input.setInputFiles(MESSY_FILE);
+  await expect.poll(() => page.getByTestId("chosen-file").textContent()).toContain("parts-messy.csv");
+  await page.screenshot({ path: artifactPath("intake-chosen.png"), fullPage: true });
+
+  // Record every value the progress bar shows, so the test needs no timing.
+  await page.evaluate(() => {
+    const seen: string[] = [];
+    (window as unknown as { progressSeen: string[] }).progressSeen = seen;
+    new MutationObserver(() => {
+      const bar = document.querySelector('[data-testid="upload-progress"]');
+      if (bar) seen.push(`${bar.getAttribute("data-phase")}:${bar.getAttribute("aria-valuenow")}`);
+    }).observe(document.body, { subtree: true, childList: true, attributes: true });
+  });
+  await page.getByRole("button", { name: "Upload and preview" }).click();
+  await page.waitForURL(/\/intakes\/[0-9a-f-]{36}$/);
+  const progress = await page.evaluate(() => (window as unknown as { progressSeen: string[] }).progressSeen);
+  expect(progress.at(-1)).toMatch(/^(checking|done):100$/);
+
+  // The preview: counts, and the problems table with a known bad cell at its row and column.
+  await expect.poll(() => page.textContent("h1")).toBe("parts-messy.csv");
+  const problems = page.getByTestId("problems-table");
+  const icMaxRow = problems.locator("tbody tr", { hasText: "ic_max" });
+  await expect.poll(() => icMaxRow.locator("td").allTextContents()).toEqual(["8", "ic_max", "45 V", "a voltage (V) where a current is expected", "error"]);
+  const partNumberRow = problems.locator("tbody tr", { hasText: "part_number" });
+  await expect.poll(() => partNumberRow.locator("td").first().textContent()).toBe("11");
+  expect(await page.locator('[data-count="rejected"] dd').textContent()).toBe("4");
+  expect(Number(await page.locator('[data-count="new"] dd').textContent())).toBeGreaterThanOrEqual(12);
+  await page.screenshot({ path: artifactPath("intake-preview.png"), fullPage: true });
+
+  await page.getByRole("button", { name: /^Commit \d+ parts$/ }).click();
+  await expect.poll(() => page.getByRole("status").first().textContent()).toContain("Committed");
+  await expect.poll(() => page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
+  await page.screenshot({ path: artifactPath("intake-committed.png"), fullPage: true });
+
+  // The catalogue finds the committed part by search; the view lives in the URL.
+  await page.goto(`${inject("appUrl")}/catalogue`);
+  await page.getByLabel("Search manufacturer or part number").fill("OSK4460N");
+  await page.getByRole("button", { name: "Apply filters" }).click();
+  await page.waitForURL((url) => url.searchParams.get("q") === "OSK4460N");
+  const table = page.getByTestId("catalogue-table");
+  await expect.poll(() => table.locator("tbody tr").count()).toBe(1);
+  expect(await table.locator("tbody tr").first().textContent()).toContain("Ostrevik Semiconductor");
+  expect(await page.getByTestId("result-count").first().textContent()).toBe("1–1 of 1 part");
+  await page.screenshot({ path: artifactPath("catalogue-search.png"), fullPage: true });
+
+  await table.getByRole("link", { name: "OSK4460N" }).click();
+  await page.waitForURL(/\/catalogue\/[0-9a-f-]{36}$/);
+  await expect.poll(() => page.textContent("h1")).toContain("OSK4460N");
+  const plot = page.getByTestId("gain-plot");
+  expect(await plot.evaluate((node) => node.tagName.toLowerCase())).toBe("svg");
+  expect(await plot.locator('g[data-series="min"] circle').count()).toBe(2);
+  expect(await plot.locator('g[data-series="typ"] circle').count()).toBe(2);
+  // The revision history names the intake that brought the part in.
+  expect(await page.getByTestId("revisions").textContent()).toContain("parts-messy.csv");
+  await page.screenshot({ path: artifactPath("part-page.png"), fullPage: true });
+
+  // An operating point outside the quoted window is marked and flagged.
+  await page.getByLabel("Operating IC").fill("500 mA");
+  await page.getByRole("button", { name: "Mark" }).click();
+  await page.waitForURL((url) => url.searchParams.get("ic") === "500 mA");
+  await expect.poll(() => page.getByTestId("operating-point").textContent()).toContain("gain-off-point");
+  expect(await plot.locator('g[data-series="operating-point"]').count()).toBe(1);
+  await page.screenshot({ path: artifactPath("part-page-operating-point.png"), fullPage: true });
+
+  expect(pageErrors).toEqual([]);
+});
