@@ -11,7 +11,9 @@ import { db } from "#app/lib/db.server.ts";
 import { queueIntakeReport } from "#app/lib/jobs.server.ts";
 import {
   bumpCatalogueVersion,
+  decodeSpec,
   deleteParts,
+  encodeSpec,
   findPartsByKeys,
   insertMany,
   insertPartRevisions,
@@ -231,8 +233,8 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
   await sequelize.transaction(async (transaction) => {
     await sequelize.query(
       `INSERT INTO intakes (id, kind, file_name, size_bytes, file_bytes, uploaded_by, state, file_refused, new_count, changed_count,
-         unchanged_count, rejected_count, warning_count, problem_count, created_at, updated_at)
-       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, clock_timestamp(), clock_timestamp())`,
+         unchanged_count, rejected_count, warning_count, problem_count, parsed_rows, created_at, updated_at)
+       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, $14, clock_timestamp(), clock_timestamp())`,
       {
         bind: [
           id,
@@ -248,6 +250,7 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
           countRejectedRows(problems),
           problems.filter((p) => p.severity === "warning").length,
           problems.length,
+          encodeRows(parsed.kind, comparison.rows),
         ],
         transaction,
       },
@@ -264,18 +267,6 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
         ["severity", "text"],
       ],
       problems.map((p, i) => [id, i, p.row, p.column, p.value, p.message, p.severity]),
-      transaction,
-    );
-    await insertMany(
-      "intake_rows",
-      [
-        ["intake_id", "uuid"],
-        ["row_number", "int4"],
-        ["status", "text"],
-        ["value", "jsonb"],
-        ["changes", "jsonb"],
-      ],
-      comparison.rows.map((r) => [id, r.row, r.status, r.value, r.changes]),
       transaction,
     );
   });
@@ -301,47 +292,59 @@ interface ProblemSql {
   severity: "error" | "warning";
 }
 
-interface IntakeRowSql {
-  row_number: number;
-  status: "new" | "changed" | "unchanged";
-  value: PartSpec | OfferRow;
-  changes: Array<{ field: string; before: unknown; after: unknown }>;
+type StoredRow = [row: number, status: "new" | "changed" | "unchanged", value: unknown, changes: FieldChange[]];
+
+function encodeRows(kind: IntakeKind, rows: readonly ComparedRowRecord[]): string {
+  return JSON.stringify(rows.map((r): StoredRow => [r.row, r.status, kind === "parts" ? encodeSpec(r.value as PartSpec) : r.value, r.changes]));
 }
 
-function changeView(kind: IntakeKind, row: IntakeRowSql): IntakeChangeView {
-  let fields = row.changes;
+function decodeRows(kind: IntakeKind, stored: readonly StoredRow[]): ComparedRowRecord[] {
+  return stored.map(([row, status, value, changes]) => ({ row, status, value: kind === "parts" ? decodeSpec(value as unknown[]) : (value as OfferRow), changes }));
+}
+
+async function readStoredRows(intake: IntakeSql, transaction?: Transaction): Promise<ComparedRowRecord[]> {
+  const [row] = await db().sequelize.query<{ parsed_rows: StoredRow[] }>(`SELECT parsed_rows FROM intakes WHERE id = $1`, {
+    bind: [intake.id],
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  return decodeRows(intake.kind, row?.parsed_rows ?? []);
+}
+
+const STATUS_ORDER = { changed: 0, new: 1, unchanged: 2 } as const;
+
+function changeView(kind: IntakeKind, row: ComparedRowRecord): IntakeChangeView {
+  let fields: IntakeChangeView["fields"] = row.changes;
   if (row.status === "new") {
     const after = kind === "parts" ? (row.value as PartSpec) : (row.value as OfferRow).offer;
     fields = Object.entries(after)
       .filter(([, value]) => value !== null && !(Array.isArray(value) && value.length === 0))
       .map(([field, value]) => ({ field, before: null, after: value }));
   }
-  return { row: row.row_number, status: row.status, manufacturer: row.value.manufacturer, partNumber: row.value.partNumber, fields };
+  return { row: row.row, status: row.status, manufacturer: row.value.manufacturer, partNumber: row.value.partNumber, fields };
 }
 
 /** One intake with its problems and the change each accepted row makes (or made); null when unknown. */
 export async function getIntake(id: string): Promise<IntakeDetail | null> {
   const intake = await selectIntake(id);
   if (!intake) return null;
-  const sequelize = db().sequelize;
-  const [problems, rows, [{ total }]] = await Promise.all([
-    sequelize.query<ProblemSql>(
+  const [problems, rows] = await Promise.all([
+    db().sequelize.query<ProblemSql>(
       `SELECT row_number, column_name, value, message, severity FROM intake_problems WHERE intake_id = $1 ORDER BY position LIMIT ${DETAIL_LIMIT}`,
       { bind: [id], type: QueryTypes.SELECT },
     ),
-    sequelize.query<IntakeRowSql>(
-      `SELECT row_number, status, value, changes FROM intake_rows WHERE intake_id = $1
-       ORDER BY CASE status WHEN 'changed' THEN 0 WHEN 'new' THEN 1 ELSE 2 END, row_number LIMIT ${DETAIL_LIMIT}`,
-      { bind: [id], type: QueryTypes.SELECT },
-    ),
-    sequelize.query<{ total: string }>(`SELECT count(*) AS total FROM intake_rows WHERE intake_id = $1`, { bind: [id], type: QueryTypes.SELECT }),
+    readStoredRows(intake),
   ]);
+  const shown = [...rows]
+    .sort((a, b) => STATUS_ORDER[a.status] - STATUS_ORDER[b.status] || a.row - b.row)
+    .slice(0, DETAIL_LIMIT)
+    .sort((a, b) => a.row - b.row);
   return {
     ...toView(intake),
     problems: problems.map((p) => ({ row: p.row_number, column: p.column_name, value: p.value, message: p.message, severity: p.severity })),
     problemsTotal: intake.problem_count,
-    changes: rows.sort((a, b) => a.row_number - b.row_number).map((r) => changeView(intake.kind, r)),
-    changesTotal: Number(total),
+    changes: shown.map((r) => changeView(intake.kind, r)),
+    changesTotal: rows.length,
   };
 }
 
@@ -368,14 +371,6 @@ function wrongState(intake: IntakeSql, wanted: string): IntakeOperationResult {
   return { ok: false, code: "wrong-state", message: `The intake "${intake.file_name}" ${states[intake.state]}, so it cannot be ${wanted}.` };
 }
 
-async function storedRows<V>(intakeId: string, transaction: Transaction): Promise<Array<IntakeRow<V>>> {
-  const rows = await db().sequelize.query<{ row_number: number; value: V }>(
-    `SELECT row_number, value FROM intake_rows WHERE intake_id = $1 ORDER BY row_number`,
-    { bind: [intakeId], type: QueryTypes.SELECT, transaction },
-  );
-  return rows.map((r) => ({ row: r.row_number, value: r.value }));
-}
-
 async function markCommitted(intakeId: string, byUserId: string, counts: Comparison["counts"], transaction: Transaction): Promise<void> {
   await db().sequelize.query(
     `UPDATE intakes SET state = 'committed', committed_by = $2, committed_at = clock_timestamp(), updated_at = clock_timestamp(),
@@ -384,30 +379,20 @@ async function markCommitted(intakeId: string, byUserId: string, counts: Compari
   );
 }
 
-/** Statuses found again at commit replace the preview's where the catalogue changed in between. */
-async function refreshRowStatuses(intakeId: string, rows: readonly ComparedRowRecord[], previous: Map<number, string>, transaction: Transaction): Promise<void> {
-  const moved = rows.filter((r) => previous.get(r.row) !== r.status);
-  if (moved.length === 0) return;
-  await db().sequelize.query(
-    `UPDATE intake_rows t SET status = u.status, changes = u.changes FROM unnest($2::int4[], $3::text[], $4::jsonb[]) AS u(row_number, status, changes)
-     WHERE t.intake_id = $1 AND t.row_number = u.row_number`,
-    { bind: [intakeId, moved.map((r) => r.row), moved.map((r) => r.status), moved.map((r) => JSON.stringify(r.changes))], transaction },
-  );
-}
-
-async function previewStatuses(intakeId: string, transaction: Transaction): Promise<Map<number, string>> {
-  const rows = await db().sequelize.query<{ row_number: number; status: string }>(`SELECT row_number, status FROM intake_rows WHERE intake_id = $1`, {
-    bind: [intakeId],
-    type: QueryTypes.SELECT,
-    transaction,
-  });
-  return new Map(rows.map((r) => [r.row_number, r.status]));
+/** Statuses found again at commit replace the preview's when the catalogue changed in between. */
+async function refreshStoredRows(intake: IntakeSql, preview: readonly ComparedRowRecord[], now: readonly ComparedRowRecord[], transaction: Transaction): Promise<void> {
+  const before = new Map(preview.map((r) => [r.row, `${r.status}${JSON.stringify(r.changes)}`]));
+  if (now.length === preview.length && now.every((r) => before.get(r.row) === `${r.status}${JSON.stringify(r.changes)}`)) return;
+  await db().sequelize.query(`UPDATE intakes SET parsed_rows = $2 WHERE id = $1`, { bind: [intake.id, encodeRows(intake.kind, now)], transaction });
 }
 
 async function commitParts(intake: IntakeSql, byUserId: string, transaction: Transaction): Promise<Comparison["counts"]> {
-  const rows = await storedRows<PartSpec>(intake.id, transaction);
+  const preview = await readStoredRows(intake, transaction);
   // Compared again against the catalogue as it is now: it may have changed since the preview.
-  const comparison = await compareParts(rows, transaction);
+  const comparison = await compareParts(
+    preview.map((r) => ({ row: r.row, value: r.value as PartSpec })),
+    transaction,
+  );
   const created: Array<{ id: string; spec: PartSpec }> = [];
   const changed: Array<{ id: string; spec: PartSpec }> = [];
   const revisions: PartRevisionInsert[] = [];
@@ -427,7 +412,7 @@ async function commitParts(intake: IntakeSql, byUserId: string, transaction: Tra
   await insertParts(created, transaction);
   await updateParts(changed, transaction);
   await insertPartRevisions(revisions, transaction);
-  await refreshRowStatuses(intake.id, comparison.rows, await previewStatuses(intake.id, transaction), transaction);
+  await refreshStoredRows(intake, preview, comparison.rows, transaction);
   return comparison.counts;
 }
 
@@ -496,8 +481,11 @@ function withoutId(offer: (Offer & { id: string }) | null): Offer | null {
 }
 
 async function commitOffers(intake: IntakeSql, transaction: Transaction): Promise<Comparison["counts"]> {
-  const rows = await storedRows<OfferRow>(intake.id, transaction);
-  const comparison = await compareOffers(rows, transaction);
+  const preview = await readStoredRows(intake, transaction);
+  const comparison = await compareOffers(
+    preview.map((r) => ({ row: r.row, value: r.value as OfferRow })),
+    transaction,
+  );
   const writes: Array<{ partId: string; offer: Offer; intakeId: string }> = [];
   const revisions: OfferRevisionInsert[] = [];
   for (const row of comparison.rows) {
@@ -509,7 +497,7 @@ async function commitOffers(intake: IntakeSql, transaction: Transaction): Promis
   }
   await upsertOffers(writes, transaction);
   await insertOfferRevisions(revisions, transaction);
-  await refreshRowStatuses(intake.id, comparison.rows, await previewStatuses(intake.id, transaction), transaction);
+  await refreshStoredRows(intake, preview, comparison.rows, transaction);
   return comparison.counts;
 }
 

@@ -219,19 +219,35 @@ const SORT_KEYS: Record<PartListQuery["sort"], SortKey> = {
   price: (e) => e.bestUnitPrice?.amount ?? null,
 };
 
-function compareKeys(a: string | number | null, b: string | number | null): number {
+// Plain code-unit order on lower-cased text: fast enough to sort a large catalogue on every uncached query.
+function compareKeys(a: string | number, b: string | number): number {
   if (typeof a === "number" && typeof b === "number") return a - b;
-  return String(a).localeCompare(String(b));
+  const x = String(a);
+  const y = String(b);
+  return x < y ? -1 : x > y ? 1 : 0;
 }
 
-/** One page of the catalogue with the query's filters and sort; missing values sort last either way. */
-export async function listParts(query: PartListQuery): Promise<PartList> {
-  const { parts, packages } = await catalogue();
+interface Match {
+  entry: CachedPart;
+  hfe: number | null;
+}
+
+// Sorted matches per query, for the current catalogue version only: paging and repeated views cost a slice.
+const RESULT_CACHE_SIZE = 200;
+const results = new Map<string, Match[]>();
+let resultsVersion = -1;
+
+function resultKey(query: PartListQuery): string {
+  const { page: _page, size: _size, cols: _cols, ...filters } = query;
+  return JSON.stringify(filters);
+}
+
+function findMatches(parts: readonly CachedPart[], query: PartListQuery): Match[] {
   const q = query.q?.toLowerCase();
   const wantedPackages = new Set(query.package.map((p) => p.trim().toLowerCase()));
   const wantedLifecycles = new Set<string>(query.lifecycle);
   const hfeAt = query.hfeAt;
-  const matches: Array<{ entry: CachedPart; hfe: number | null }> = [];
+  const matches: Match[] = [];
   for (const entry of parts) {
     const { part } = entry;
     if (q && !entry.manufacturerLower.includes(q) && !entry.partNumberLower.includes(q)) continue;
@@ -249,7 +265,7 @@ export async function listParts(query: PartListQuery): Promise<PartList> {
   }
   const key = SORT_KEYS[query.sort];
   const direction = query.dir === "desc" ? -1 : 1;
-  const keyed = matches.map((m) => ({ ...m, key: key(m.entry, m.hfe) }));
+  const keyed = matches.map((match) => ({ match, key: key(match.entry, match.hfe) }));
   keyed.sort((a, b) => {
     if (a.key === null || b.key === null) {
       if (a.key !== b.key) return a.key === null ? 1 : -1;
@@ -257,11 +273,33 @@ export async function listParts(query: PartListQuery): Promise<PartList> {
       const order = compareKeys(a.key, b.key) * direction;
       if (order !== 0) return order;
     }
-    return compareKeys(a.entry.manufacturerLower, b.entry.manufacturerLower) || compareKeys(a.entry.partNumberLower, b.entry.partNumberLower);
+    return (
+      compareKeys(a.match.entry.manufacturerLower, b.match.entry.manufacturerLower) ||
+      compareKeys(a.match.entry.partNumberLower, b.match.entry.partNumberLower)
+    );
   });
+  return keyed.map((k) => k.match);
+}
+
+/** One page of the catalogue with the query's filters and sort; missing values sort last either way. */
+export async function listParts(query: PartListQuery): Promise<PartList> {
+  const current = await catalogue();
+  if (resultsVersion !== current.version) {
+    results.clear();
+    resultsVersion = current.version;
+  }
+  const key = resultKey(query);
+  let matches = results.get(key);
+  if (matches) {
+    results.delete(key);
+  } else {
+    matches = findMatches(current.parts, query);
+    if (results.size >= RESULT_CACHE_SIZE) results.delete(results.keys().next().value!);
+  }
+  results.set(key, matches);
   const start = (query.page - 1) * query.size;
-  const rows = keyed.slice(start, start + query.size).map(({ entry, hfe }) => toListRow(entry, hfe));
-  return { rows, total: matches.length, page: query.page, pageSize: query.size, packages };
+  const rows = matches.slice(start, start + query.size).map(({ entry, hfe }) => toListRow(entry, hfe));
+  return { rows, total: matches.length, page: query.page, pageSize: query.size, packages: current.packages };
 }
 
 function toListRow(entry: CachedPart, hfe: number | null): PartListRow {

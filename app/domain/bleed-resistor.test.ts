@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { highestGainAt, suggestBleedForPair, suggestBleedResistor, type PairGainModel } from "./bleed-resistor";
+import { highestGainAt, highestGainModel, suggestBleedForPair, suggestBleedResistor, type PairGainModel } from "./bleed-resistor";
 import { E24 } from "./e-series";
 import type { GainPoint, PartSpec, Polarity } from "./part";
 import { parseRequirementSheet } from "./requirement";
@@ -101,6 +101,8 @@ describe("highestGainAt and suggestBleedForPair", () => {
     expect(highestGainAt(makePart("npn", [point(1, 40, 80, 160)], 0.7), 1)).toBe(160);
     expect(highestGainAt(makePart("npn", [point(1, 40, 80, null)], 0.7), 1)).toBe(80);
     expect(highestGainAt(makePart("npn", [point(1, 40, null, null)], 0.7), 1)).toBe(40);
+    const part = makePart("npn", [point(0.1, 40, 80, null), point(1, 30, 60, null)], 0.7);
+    expect(highestGainModel(part)(0.3)).toBeCloseTo(highestGainAt(part, 0.3), 9);
   });
 
   it("reads the pair's lowest current, gains and output VBE from the parts and the sheet", () => {

@@ -4,7 +4,7 @@ import { cornerGainModel, type GainModel, solvePairCurrents, type CompoundTopolo
 import { roundToSeries, type ESeriesName } from "./e-series";
 import { chooseVbe, type EvaluateOptions } from "./evaluate-part";
 import { hfeAt, worstCaseGain } from "./gain-curve";
-import type { PartSpec } from "./part";
+import type { GainPoint, PartSpec } from "./part";
 import { minIcOf, type RequirementSheet } from "./requirement";
 
 /** The bleed may take at most this share of the driver's current at the lowest operating current (a product decision). */
@@ -126,10 +126,21 @@ export function highestGainAt(part: PartSpec, icAmps: number, options: EvaluateO
   return hfeAt(part.gainPoints, icAmps, "max") ?? hfeAt(part.gainPoints, icAmps, "typ") ?? worstCaseGain(part.gainPoints, icAmps, options).hfe;
 }
 
-/** highestGainAt as a model with its curve built once. */
+const highestModels = new WeakMap<GainPoint[], GainModel>();
+
+/** highestGainAt as a model with its curve built once per part (gain-point lists are never changed once read). */
 export function highestGainModel(part: PartSpec, options: EvaluateOptions = {}): GainModel {
+  const known = highestModels.get(part.gainPoints);
+  if (known !== undefined) return known;
+  const model = buildHighestGainModel(part, options);
+  highestModels.set(part.gainPoints, model);
+  return model;
+}
+
+function buildHighestGainModel(part: PartSpec, options: EvaluateOptions): GainModel {
   for (const corner of ["max", "typ"] as const) {
-    if (part.gainPoints.some((p) => (corner === "max" ? p.hfeMax : p.hfeTyp) != null)) return cornerGainModel(part.gainPoints, corner);
+    const first = part.gainPoints[0];
+    if (first !== undefined && hfeAt(part.gainPoints, first.icAmps, corner) !== null) return cornerGainModel(part.gainPoints, corner);
   }
   return worstGainModel(part, options);
 }

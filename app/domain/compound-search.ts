@@ -14,7 +14,6 @@ import {
 } from "./compound";
 import { assessDataQuality } from "./data-quality";
 import { chooseVbe, findExclusions } from "./evaluate-part";
-import { vceSatAt } from "./gain-curve";
 import type { PartSpec, Polarity } from "./part";
 import { compareText, type CatalogueEntry, type RankingOptions, readSupply, type SupplyFacts } from "./rank";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
@@ -100,15 +99,14 @@ interface PartFacts<P extends PartSpec> {
   /** Highest and lowest worst-case hFE anywhere on its curve. */
   maxGain: number;
   minGain: number;
-  /** As an output: upper bounds on its current and thermal margin shares (null: the check gives no margin). */
+  /** As an output: an upper bound on its current check's margin share. */
   outputCurrentShare: number;
-  outputThermalShare: number | null;
-  /** As an output it must fail: the least current it can carry is above IC max or overheats it. */
+  /** As an output it must fail: the least current it can carry is above IC max. */
   outputFails: boolean;
-  /** As an output, the pair's VCE(sat) is at least its VBE: the saturation margin share can be no better than this. */
-  outputSaturationShare: number | null;
-  /** As a driver, it quotes a VCE(sat) the pair's saturation check can use (so that check gives a margin). */
-  quotesSaturation: boolean;
+  /** As an output, the VBE(on) evaluateCompound gives it, which adds to the driver's VCE(sat). */
+  outputVbeVolts: number;
+  /** As a driver: the lowest VCE(sat) its curve can give (vceSatAt's source, max else typ); null when none is quoted. */
+  leastSatVolts: number | null;
 }
 
 interface Settings {
@@ -150,34 +148,35 @@ function leastOutputCurrent(icAmps: number, minGain: number, settings: BaseSetti
   return (Math.max(0, icAmps - bleedLimit) * minGain) / (minGain + 1);
 }
 
+/** The lowest VCE(sat) vceSatAt can return: held flat below, log-log between and rising above the quoted points. */
+function leastSaturationVolts(part: PartSpec): number | null {
+  for (const source of ["max", "typ"] as const) {
+    let least: number | null = null;
+    for (const point of part.saturationPoints) {
+      const volts = source === "max" ? point.vceSatMaxVolts : point.vceSatTypVolts;
+      if (volts != null && volts > 0 && point.icAmps > 0) least = least === null ? volts : Math.min(least, volts);
+    }
+    if (least !== null) return least;
+  }
+  return null;
+}
+
+/** Whether the pair's VCE(sat) = VCE(sat)1 + VBE2 must exceed the allowed drop (a hair of slack for rounding). */
+function saturationMustFail(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, allowedVolts: number | null): boolean {
+  if (allowedVolts === null || driver.leastSatVolts === null) return false;
+  return driver.leastSatVolts + output.outputVbeVolts > allowedVolts * (1 + 1e-9);
+}
+
 function collectFacts<P extends PartSpec>(entries: readonly CatalogueEntry<P>[], settings: BaseSettings): PartFacts<P>[] {
   const { sheet, options, fullMargin } = settings;
   const anyPolarity: RequirementSheet = { ...sheet, polarity: "any" };
   const peakVce = peakVceOf(sheet);
-  const switching = sheet.mode === "switching";
   return entries.map((entry, index) => {
     const part = entry.part;
     const supply = readSupply(entry.offers, part.lifecycle, sheet.orderQuantity, options.currency ?? null);
     const voltage = judgeAgainstRating(peakVce, part.vceoVolts, sheet.derating.voltageFraction);
     const gains = gainRange(part, options);
     const current = judgeAgainstRating(leastOutputCurrent(peakIcOf(sheet), gains.minGain, settings), part.icMaxAmps, sheet.derating.currentFraction);
-    // The output's VCE is the operating VCE (linear) or VCE(sat)1 + VBE2 ≥ VBE2 (switching), as evaluateCompound takes it.
-    const thermal = checkThermal({
-      mode: sheet.mode,
-      vceVolts: switching ? chooseVbe(part, sheet.operatingIcAmps, "linear").volts : operatingVceOf(sheet),
-      icAmps: leastOutputCurrent(sheet.operatingIcAmps, gains.minGain, settings),
-      dutyCycle: switching ? sheet.dutyCycle : 1,
-      ambientC: sheet.ambientC,
-      rthJaCPerW: part.rthJaCPerW,
-      rthJcCPerW: part.rthJcCPerW,
-      heatsinkRthCPerW: sheet.heatsinkRthCPerW,
-      tjMaxC: part.tjMaxC,
-      ptotWatts: part.ptotWatts,
-      ptotReference: part.ptotReference,
-      derating: sheet.derating,
-    });
-    const outputVbe = chooseVbe(part, sheet.operatingIcAmps, "linear").volts;
-    const allowed = sheet.allowedSatDropVolts;
     return {
       index,
       part,
@@ -188,12 +187,42 @@ function collectFacts<P extends PartSpec>(entries: readonly CatalogueEntry<P>[],
       usable: findExclusions(part, anyPolarity).length === 0 && voltage.verdict !== "fails" && gains.maxGain > 0,
       ...gains,
       outputCurrentShare: shareOfMargin(current.margin, fullMargin),
-      outputThermalShare: thermal.margin === null ? null : shareOfMargin(thermal.margin, fullMargin),
-      outputFails: current.verdict === "fails" || thermal.verdict === "fails",
-      outputSaturationShare: switching && allowed !== null ? shareOfMargin((allowed - outputVbe) / allowed, fullMargin) : null,
-      quotesSaturation: vceSatAt(part.saturationPoints, sheet.operatingIcAmps) !== null,
+      outputFails: current.verdict === "fails",
+      outputVbeVolts: chooseVbe(part, sheet.operatingIcAmps, "linear").volts,
+      leastSatVolts: leastSaturationVolts(part),
     };
   });
+}
+
+interface ThermalBound {
+  /** Upper bound on the output's thermal margin share; null when its thermal check gives no margin. */
+  share: number | null;
+  fails: boolean;
+}
+
+/**
+ * The output's thermal check at the least current it can carry: its VCE is the operating VCE (linear) or
+ * VCE(sat)1 + VBE2 ≥ VBE2 (switching), as evaluateCompound takes it. Worked out only for outputs the search reaches.
+ */
+function boundOutputThermal(facts: PartFacts<PartSpec>, settings: BaseSettings): ThermalBound {
+  const { sheet } = settings;
+  const part = facts.part;
+  const switching = sheet.mode === "switching";
+  const thermal = checkThermal({
+    mode: sheet.mode,
+    vceVolts: switching ? chooseVbe(part, sheet.operatingIcAmps, "linear").volts : operatingVceOf(sheet),
+    icAmps: leastOutputCurrent(sheet.operatingIcAmps, facts.minGain, settings),
+    dutyCycle: switching ? sheet.dutyCycle : 1,
+    ambientC: sheet.ambientC,
+    rthJaCPerW: part.rthJaCPerW,
+    rthJcCPerW: part.rthJcCPerW,
+    heatsinkRthCPerW: sheet.heatsinkRthCPerW,
+    tjMaxC: part.tjMaxC,
+    ptotWatts: part.ptotWatts,
+    ptotReference: part.ptotReference,
+    derating: sheet.derating,
+  });
+  return { share: thermal.margin === null ? null : shareOfMargin(thermal.margin, settings.fullMargin), fails: thermal.verdict === "fails" };
 }
 
 function requiredPairHfe(sheet: RequirementSheet): number | null {
@@ -251,14 +280,18 @@ function cheapestPrice(list: readonly PartFacts<PartSpec>[]): number | null {
 }
 
 /** Margin-share bounds a pair cannot beat: the tightest check governs the margin score. */
-function pairMarginBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, topology: CompoundTopology, settings: Settings): number {
+function pairMarginBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, thermal: ThermalBound, topology: CompoundTopology, settings: Settings): number {
   const { sheet, requiredHfe, fullMargin } = settings;
   let least = Math.min(driver.voltageShare, output.voltageShare, output.outputCurrentShare);
-  if (output.outputThermalShare !== null) least = Math.min(least, output.outputThermalShare);
-  const driverCurrent = judgeAgainstRating(leastDriverCurrent(driver, output, peakIcOf(sheet)), driver.part.icMaxAmps, sheet.derating.currentFraction);
-  least = Math.min(least, shareOfMargin(driverCurrent.margin, fullMargin));
-  // VCE(sat) = VCE(sat)1 + VBE2 > VBE2, so the output's VBE alone bounds the saturation margin.
-  if (driver.quotesSaturation && output.outputSaturationShare !== null) least = Math.min(least, output.outputSaturationShare);
+  if (thermal.share !== null) least = Math.min(least, thermal.share);
+  // The same arithmetic as judgeAgainstRating, without building its result in the innermost loop.
+  const deratedLimit = driver.part.icMaxAmps * sheet.derating.currentFraction;
+  least = Math.min(least, shareOfMargin((deratedLimit - leastDriverCurrent(driver, output, peakIcOf(sheet))) / deratedLimit, fullMargin));
+  // VCE(sat) = VCE(sat)1 + VBE2, and VCE(sat)1 is no lower than the least the driver's curve gives.
+  const allowed = sheet.allowedSatDropVolts;
+  if (sheet.mode === "switching" && allowed !== null && driver.leastSatVolts !== null) {
+    least = Math.min(least, shareOfMargin((allowed - (driver.leastSatVolts + output.outputVbeVolts)) / allowed, fullMargin));
+  }
   if (requiredHfe !== null) {
     const beta = compoundBeta(topology, driver.maxGain, output.maxGain);
     least = Math.min(least, shareOfMargin((beta - requiredHfe) / beta, fullMargin));
@@ -275,18 +308,15 @@ function sumPrices(a: number | null, b: number | null): number | null {
 }
 
 /** A part's bound in one role: the best any partner could make of it (the cheapest partner, perfect otherwise). */
-function soloBound(facts: PartFacts<PartSpec>, role: "driver" | "output", cheapestPartner: number | null, settings: Settings): number {
-  let margin = facts.voltageShare;
-  if (role === "output") {
-    margin = Math.min(margin, facts.outputCurrentShare);
-    if (facts.outputThermalShare !== null) margin = Math.min(margin, facts.outputThermalShare);
-  }
+function soloBound(facts: PartFacts<PartSpec>, role: "driver" | "output", cheapestPartner: number | null, settings: Settings, thermal?: ThermalBound): number {
+  let margin = role === "output" ? Math.min(facts.voltageShare, facts.outputCurrentShare) : facts.voltageShare;
+  if (thermal?.share != null) margin = Math.min(margin, thermal.share);
   return scoreBound(margin, sumPrices(facts.unitPrice, cheapestPartner), facts.supply.stockScore, facts.supply.lifecycleScore, facts.dataQuality, settings);
 }
 
-function pairBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, topology: CompoundTopology, settings: Settings): number {
+function pairBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, thermal: ThermalBound, topology: CompoundTopology, settings: Settings): number {
   return scoreBound(
-    pairMarginBound(driver, output, topology, settings),
+    pairMarginBound(driver, output, thermal, topology, settings),
     sumPrices(driver.unitPrice, output.unitPrice),
     Math.min(driver.supply.stockScore, output.supply.stockScore),
     Math.min(driver.supply.lifecycleScore, output.supply.lifecycleScore),
@@ -422,27 +452,32 @@ export function searchCompounds<P extends PartSpec>(
   const heap = new TopK<RankedCompound<P>>(k, compareRankedCompounds);
   const peakIc = peakIcOf(sheet);
   const counts = { considered: 0, evaluated: 0, failed: 0 };
-  const slots: { topology: CompoundTopology; output: Bounded<PartFacts<P>>; drivers: Bounded<PartFacts<P>>[] }[] = [];
+  const slots: { topology: CompoundTopology; output: Bounded<PartFacts<P>>; drivers: Bounded<PartFacts<P>>[]; cheapestDriver: number | null }[] = [];
   for (const pass of passes) {
     const cheapestDriver = cheapestPrice(pass.drivers);
     const cheapestOutput = cheapestPrice(pass.outputs);
     const drivers = byBound(pass.drivers.map((item) => ({ item, bound: soloBound(item, "driver", cheapestOutput, settings) })));
-    for (const item of pass.outputs) slots.push({ topology: pass.topology, output: { item, bound: soloBound(item, "output", cheapestDriver, settings) }, drivers });
+    for (const item of pass.outputs) {
+      slots.push({ topology: pass.topology, output: { item, bound: soloBound(item, "output", cheapestDriver, settings) }, drivers, cheapestDriver });
+    }
   }
   slots.sort((a, b) => b.output.bound - a.output.bound || a.output.item.index - b.output.item.index || compareText(a.topology, b.topology));
 
-  const kthScore = () => (heap.isFull ? (heap.worst()?.score ?? Number.NEGATIVE_INFINITY) : Number.NEGATIVE_INFINITY);
+  const kthScore = () => (heap.isFull ? (heap.worst()?.score ?? Number.POSITIVE_INFINITY) : Number.NEGATIVE_INFINITY);
   for (const slot of slots) {
     if (slot.output.bound < kthScore()) break;
     const output = slot.output.item;
+    const thermal = boundOutputThermal(output, settings);
+    // Even at the least current it can carry, the output overheats: every pair with it fails.
+    if (thermal.fails) continue;
+    if (soloBound(output, "output", slot.cheapestDriver, settings, thermal) < kthScore()) continue;
     for (const { item: driver, bound } of slot.drivers) {
       if (bound < kthScore()) break;
       counts.considered += 1;
       if (!reaches(slot.topology, settings.requiredHfe, driver.maxGain, output.maxGain)) continue;
       if (leastDriverCurrent(driver, output, peakIc) > driver.part.icMaxAmps) continue;
-      // A quoted VCE(sat)1 is above zero, so an output VBE at or above the allowed drop fails saturation.
-      if (driver.quotesSaturation && output.outputSaturationShare !== null && output.outputSaturationShare <= 0) continue;
-      if (pairBound(driver, output, slot.topology, settings) < kthScore()) continue;
+      if (sheet.mode === "switching" && saturationMustFail(driver, output, sheet.allowedSatDropVolts)) continue;
+      if (pairBound(driver, output, thermal, slot.topology, settings) < kthScore()) continue;
       counts.evaluated += 1;
       const ranked = scorePair(slot.topology, driver, output, settings);
       if (ranked === null) counts.failed += 1;

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { vceSatAt } from "./gain-curve";
+import { hfeAt, vceSatAt, worstCaseGain } from "./gain-curve";
 import type { GainPoint, PartSpec, Polarity, SaturationPoint } from "./part";
 import { parseRequirementSheet } from "./requirement";
 import {
@@ -9,6 +9,7 @@ import {
   compoundPolarity,
   compoundVbe,
   compoundVceSat,
+  cornerGainModel,
   darlingtonBeta,
   evaluateCompound,
   findCompoundExclusions,
@@ -16,6 +17,7 @@ import {
   solvePairCurrents,
   sziklaiBeta,
   type CompoundTopology,
+  worstGainModel,
 } from "./compound";
 
 const flat = (hfe: number) => () => hfe;
@@ -269,5 +271,35 @@ describe("evaluateCompound", () => {
     expect(findCompoundExclusions(driver, output, { ...linear, polarity: "pnp" })[0]).toContain("acts as NPN");
     expect(findCompoundExclusions(driver, output, { ...linear, packages: ["TO-220"] })).toEqual(["driver: package TO-92 is not among TO-220"]);
     expect(findCompoundExclusions(driver, output, linear)).toEqual([]);
+  });
+});
+
+describe("gain models", () => {
+  const pointArb = fc.record({
+    icAmps: fc.double({ min: 1e-5, max: 5, noNaN: true }),
+    vceVolts: fc.constant(5),
+    hfeMin: fc.option(fc.double({ min: 5, max: 800, noNaN: true }), { nil: null }),
+    hfeTyp: fc.option(fc.double({ min: 5, max: 800, noNaN: true }), { nil: null }),
+    hfeMax: fc.option(fc.double({ min: 5, max: 800, noNaN: true }), { nil: null }),
+    tempC: fc.constantFrom(25, null, 100),
+  });
+
+  it("gives worstCaseGain's hFE at any current, with the curve built once (property)", () => {
+    fc.assert(
+      fc.property(fc.array(pointArb, { minLength: 1, maxLength: 5 }), fc.double({ min: 1e-7, max: 50, noNaN: true }), (points, icAmps) => {
+        const part = makeDevice("MR-G", "npn", "small", { gainPoints: points });
+        const expected = worstCaseGain(points, icAmps).hfe;
+        expect(worstGainModel(part)(icAmps)).toBeCloseTo(expected, 9);
+      }),
+    );
+  });
+
+  it("draws one corner log-log between quoted currents and flat beyond, scaled", () => {
+    const points = [gainPoint(1e-3, 100), gainPoint(1e-1, 50)];
+    const model = cornerGainModel(points, "typ", 0.5);
+    expect(model(1e-2)).toBeCloseTo((hfeAt(points, 1e-2, "typ") ?? 0) * 0.5, 9);
+    expect(model(1e-6)).toBeCloseTo(80, 9);
+    expect(model(10)).toBeCloseTo(40, 9);
+    expect(cornerGainModel(points, "max")(1e-2)).toBe(0);
   });
 });

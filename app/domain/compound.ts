@@ -10,7 +10,7 @@ import { checkThermal } from "./checks/thermal";
 import { checkVoltage } from "./checks/voltage";
 import { assessDataQuality } from "./data-quality";
 import { chooseVbe, DEFAULT_VCE_SAT_VOLTS, type EvaluateOptions, findExclusions } from "./evaluate-part";
-import { type GainCorner, type GainEstimate, hfeAt, type SaturationEstimate, vceSatAt, type WorstCaseGainOptions, worstCaseGain } from "./gain-curve";
+import { DEFAULT_TYP_TO_MIN_FACTOR, type GainCorner, type GainEstimate, hfeAt, type SaturationEstimate, vceSatAt, type WorstCaseGainOptions, worstCaseGain } from "./gain-curve";
 import type { GainPoint, PartSpec, Polarity } from "./part";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
 
@@ -188,14 +188,31 @@ export function cornerGainModel(points: GainPoint[], corner: GainCorner, scale =
   };
 }
 
-/** The worst-case hFE of a part as worstCaseGain gives it (min, else typ or max derated), curve built once. */
+// Parts are values: a gain-point list is never changed after it is read, so its models can be kept with it.
+const worstModels = new WeakMap<GainPoint[], Map<number, GainModel>>();
+
+/** The worst-case hFE of a part as worstCaseGain gives it (min, else typ or max derated), curve built once per part. */
 export function worstGainModel(part: PartSpec, options: WorstCaseGainOptions = {}): GainModel {
-  const first = part.gainPoints[0];
+  const factor = options.typToMinFactor ?? DEFAULT_TYP_TO_MIN_FACTOR;
+  let byFactor = worstModels.get(part.gainPoints);
+  if (byFactor === undefined) {
+    byFactor = new Map();
+    worstModels.set(part.gainPoints, byFactor);
+  }
+  const known = byFactor.get(factor);
+  if (known !== undefined) return known;
+  const model = buildWorstGainModel(part.gainPoints, options);
+  byFactor.set(factor, model);
+  return model;
+}
+
+function buildWorstGainModel(points: GainPoint[], options: WorstCaseGainOptions): GainModel {
+  const first = points[0];
   if (first === undefined) return () => 0;
-  const estimate = worstCaseGain(part.gainPoints, first.icAmps, options);
+  const estimate = worstCaseGain(points, first.icAmps, options);
   if (estimate.source === "none") return () => 0;
   const corner: GainCorner = estimate.source === "min" ? "min" : estimate.source === "typ-derated" ? "typ" : "max";
-  return cornerGainModel(part.gainPoints, corner, estimate.typToMinFactor ?? 1);
+  return cornerGainModel(points, corner, estimate.typToMinFactor ?? 1);
 }
 
 /** The polarity a pair acts with: its driver's, in both topologies. */

@@ -2,7 +2,6 @@ import { getSequelize } from "../sequelize.ts";
 import { CatalogueVersion } from "./catalogue-version.ts";
 import { Intake } from "./intake.ts";
 import { IntakeProblem } from "./intake-problem.ts";
-import { IntakeRowRecord } from "./intake-row.ts";
 import { Offer } from "./offer.ts";
 import { OfferRevision } from "./offer-revision.ts";
 import { Part } from "./part.ts";
@@ -24,7 +23,6 @@ export function initModels() {
     Offer.initModel(sequelize);
     Intake.initModel(sequelize);
     IntakeProblem.initModel(sequelize);
-    IntakeRowRecord.initModel(sequelize);
     PartRevision.initModel(sequelize);
     OfferRevision.initModel(sequelize);
     CatalogueVersion.initModel(sequelize);
@@ -42,7 +40,6 @@ export function initModels() {
     PartRevision.belongsTo(User, { foreignKey: "editorId", as: "editor" });
     Intake.belongsTo(User, { foreignKey: "uploadedBy", as: "uploader" });
     Intake.hasMany(IntakeProblem, { foreignKey: "intakeId", as: "problems" });
-    Intake.hasMany(IntakeRowRecord, { foreignKey: "intakeId", as: "rows" });
     Intake.hasMany(PartRevision, { foreignKey: "intakeId", as: "partRevisions" });
     Intake.hasMany(OfferRevision, { foreignKey: "intakeId", as: "offerRevisions" });
     OfferRevision.belongsTo(Part, { foreignKey: "partId", as: "part" });
@@ -57,11 +54,10 @@ export function initModels() {
     Offer,
     Intake,
     IntakeProblem,
-    IntakeRowRecord,
     PartRevision,
     OfferRevision,
     CatalogueVersion,
   };
 }
 
-export { CatalogueVersion, Intake, IntakeProblem, IntakeRowRecord, Offer, OfferRevision, Part, PartRevision, Team, User, UserRole };
+export { CatalogueVersion, Intake, IntakeProblem, Offer, OfferRevision, Part, PartRevision, Team, User, UserRole };

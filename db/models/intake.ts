@@ -19,6 +19,8 @@ export class Intake extends Model<InferAttributes<Intake, { omit: "uploader" }>,
   declare rejectedCount: number;
   declare warningCount: number;
   declare problemCount: number;
+  /** [row, status, value, changes] per accepted row, as parsed and compared at preview. */
+  declare parsedRows: CreationOptional<unknown[]>;
   declare committedBy: CreationOptional<string | null>;
   declare committedAt: CreationOptional<Date | null>;
   declare discardedBy: CreationOptional<string | null>;
@@ -47,6 +49,7 @@ export class Intake extends Model<InferAttributes<Intake, { omit: "uploader" }>,
         rejectedCount: count,
         warningCount: count,
         problemCount: count,
+        parsedRows: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         committedBy: { type: DataTypes.UUID, allowNull: true },
         committedAt: { type: DataTypes.DATE, allowNull: true },
         discardedBy: { type: DataTypes.UUID, allowNull: true },

@@ -1,5 +1,6 @@
 // The librarian's journey in a real browser: drop a messy CSV, read the problems, commit,
 // then find a committed part in the catalogue and see its hFE plot.
+import { readFileSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, expect, inject, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
@@ -19,6 +20,8 @@ afterAll(async () => {
   await browser?.close();
 });
 
+const GOOD_FILE = path.resolve(import.meta.dirname, "../../fixtures/intake/good/parts-three-gain-points.csv");
+
 async function signIn(page: Page, email: string): Promise<void> {
   await page.goto(`${inject("appUrl")}/sign-in`);
   const since = Date.now();
@@ -31,12 +34,13 @@ async function signIn(page: Page, email: string): Promise<void> {
   await page.waitForURL((url) => url.pathname === "/");
 }
 
-it("a librarian drops a messy parts file, reads its problems, commits it and finds a new part with its gain plot", async () => {
+it("a librarian drops a messy parts file, reads its problems, commits it, finds a new part with its plot, and is refused a rollback a later intake blocks", async () => {
   const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
   const pageErrors: string[] = [];
   page.on("pageerror", (error) => pageErrors.push(error.message));
   page.on("console", (message) => {
-    if (message.type() === "error") pageErrors.push(message.text());
+    // The refused rollback answers 409 on purpose; the browser logs that answer.
+    if (message.type() === "error" && !message.text().includes("status of 409")) pageErrors.push(message.text());
   });
 
   await signIn(page, LIBRARIAN);
@@ -79,6 +83,7 @@ it("a librarian drops a messy parts file, reads its problems, commits it and fin
   await expect.poll(() => page.getByRole("status").first().textContent()).toContain("Committed");
   await expect.poll(() => page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
   await page.screenshot({ path: artifactPath("intake-committed.png"), fullPage: true });
+  const intakeUrl = page.url();
 
   // The catalogue finds the committed part by search; the view lives in the URL.
   await page.goto(`${inject("appUrl")}/catalogue`);
@@ -110,5 +115,41 @@ it("a librarian drops a messy parts file, reads its problems, commits it and fin
   expect(await plot.locator('g[data-series="operating-point"]').count()).toBe(1);
   await page.screenshot({ path: artifactPath("part-page-operating-point.png"), fullPage: true });
 
+  // A second file corrects VCEO of the same part; the first intake can then not be rolled back on its own.
+  const [header, , , row4] = readFileSync(MESSY_FILE, "utf8").split(/\r?\n/);
+  const correction = `${header}\n${row4!.replace("SOT-23,,45,50,", "SOT-23,,50,50,")}\n`;
+  await page.goto(`${inject("appUrl")}/intakes/new`);
+  await page.getByTestId("drop-zone-input").setInputFiles({ name: "osk4460n-vceo.csv", mimeType: "text/csv", buffer: Buffer.from(correction) });
+  await page.getByRole("button", { name: "Upload and preview" }).click();
+  await page.waitForURL((url) => /\/intakes\/[0-9a-f-]{36}$/.test(url.pathname) && url.href !== intakeUrl);
+  await expect.poll(() => page.textContent("h1")).toBe("osk4460n-vceo.csv");
+  const change = page.locator('[data-change-row="2"]');
+  await expect.poll(() => change.locator("tbody tr").first().locator("td").allTextContents()).toEqual(["VCEO", "45 V", "→", "50 V"]);
+  await page.screenshot({ path: artifactPath("intake-change-preview.png"), fullPage: true });
+  await page.getByRole("button", { name: "Commit 1 part" }).click();
+  await expect.poll(() => page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
+
+  // Rolling back asks for a confirmation first; the server's refusal names the later intake.
+  await page.goto(intakeUrl);
+  await page.getByText("Roll back this intake…").click();
+  await page.screenshot({ path: artifactPath("intake-rollback-confirm.png"), fullPage: true });
+  await page.getByRole("button", { name: "Yes, roll back parts-messy.csv" }).click();
+  await expect.poll(() => page.getByRole("alert").first().textContent()).toContain("osk4460n-vceo.csv");
+  expect(await page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
+  await page.screenshot({ path: artifactPath("intake-rollback-refused.png"), fullPage: true });
   expect(pageErrors).toEqual([]);
+});
+
+it("without JavaScript the drop zone is a plain upload form that still reaches the preview", async () => {
+  const context = await browser.newContext({ javaScriptEnabled: false });
+  const page = await context.newPage();
+  await signIn(page, LIBRARIAN);
+  await page.goto(`${inject("appUrl")}/intakes/new`);
+  await page.locator('input[type="file"][name="file"]').setInputFiles(GOOD_FILE);
+  await page.getByRole("button", { name: "Upload and preview" }).click();
+  await page.waitForURL(/\/intakes\/[0-9a-f-]{36}$/);
+  expect(await page.textContent("h1")).toBe("parts-three-gain-points.csv");
+  expect(await page.locator("[data-state]").first().getAttribute("data-state")).toBe("previewed");
+  await page.screenshot({ path: artifactPath("intake-preview-no-js.png"), fullPage: true });
+  await context.close();
 });

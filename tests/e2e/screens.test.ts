@@ -42,6 +42,7 @@ afterAll(async () => {
 
 it("the catalogue: default view, hFE at a chosen IC, a refused filter and an empty result", async () => {
   await shoot("/catalogue", "catalogue");
+  await page.screenshot({ path: artifactPath("screen-catalogue-top.png") });
   expect(await page.getByTestId("result-count").first().textContent()).toMatch(/^1–50 of \d+ parts · page 1 of \d+$/);
 
   await shoot("/catalogue?hfeAt=100mA&hfeMin=50&sort=hfe&dir=desc&cols=partNumber&cols=manufacturer&cols=vceo&cols=icMax&cols=hfe&cols=price&cols=stock&cols=flags", "catalogue-hfe");
@@ -65,6 +66,7 @@ it("a power part's page with its caution, offers and plot; its correction form r
 
   await page.getByRole("link", { name: "Correct this part" }).click();
   await page.waitForURL(/\/edit$/);
+  await expect.poll(() => page.textContent("h1")).toContain("Correct ");
   await page.screenshot({ path: artifactPath("screen-part-edit.png"), fullPage: true });
   await page.getByLabel("IC max").fill("3 V");
   await page.getByRole("button", { name: "Save correction" }).click();
@@ -83,6 +85,7 @@ it("the intake pages: list, formats, one intake", async () => {
   await page.goto(`${inject("appUrl")}/intakes`);
   await page.getByTestId("intakes").locator("tbody tr a").first().click();
   await page.waitForURL(/\/intakes\/[0-9a-f-]{36}$/);
+  await page.getByTestId("problems-table").or(page.getByText("No problems")).first().waitFor();
   await page.screenshot({ path: artifactPath("screen-intake.png"), fullPage: true });
   expect(pageErrors).toEqual([]);
 });

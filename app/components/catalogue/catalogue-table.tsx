@@ -171,7 +171,7 @@ export function CatalogueTable({
                   <th
                     key={header.id}
                     scope="col"
-                    className={`whitespace-nowrap px-3 py-2 font-medium ${numeric ? "text-right" : "text-left"}`}
+                    className={`whitespace-nowrap px-2 py-2 font-medium first:pl-3 last:pr-3 ${numeric ? "text-right" : "text-left"}`}
                     aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
                   >
                     {column.sort ? (
@@ -202,7 +202,7 @@ export function CatalogueTable({
                 return (
                   <td
                     key={cell.id}
-                    className={`px-3 py-1.5 align-baseline ${NUMERIC_COLUMNS.has(column.id) ? "whitespace-nowrap text-right tabular-nums" : ""}`}
+                    className={`px-2 py-1.5 align-baseline first:pl-3 last:pr-3 ${NUMERIC_COLUMNS.has(column.id) ? "whitespace-nowrap text-right tabular-nums" : ""}`}
                   >
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>

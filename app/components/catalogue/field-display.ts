@@ -27,7 +27,7 @@ export function inFieldOrder<T extends { field: string }>(changes: readonly T[])
 
 export function fieldLabel(field: string): string {
   const label = SPECS.get(field)?.label ?? GROUP_LABELS[field] ?? field;
-  return label.startsWith("hFE") ? label : label.charAt(0).toUpperCase() + label.slice(1);
+  return /^[a-z][A-Z]/.test(label) ? label : label.charAt(0).toUpperCase() + label.slice(1);
 }
 
 function isRecord(value: unknown): value is Record<string, unknown> {
@@ -79,4 +79,24 @@ export function formatFieldValue(field: string, value: unknown): string {
   const spec = SPECS.get(field) ?? GAIN.columns.find((c) => c.field === field) ?? SAT.columns.find((c) => c.field === field);
   if (spec && spec.type.kind === "quantity" && typeof value === "number") return formatQuantity(value, spec.type.dimension, { digits: 6 });
   return showValue(value);
+}
+
+/** A new offer in one line: supplier, stock and price breaks in its currency. */
+export function offerSummary(fields: ReadonlyArray<{ field: string; after: unknown }>): string {
+  const value = (name: string) => fields.find((f) => f.field === name)?.after;
+  const currency = typeof value("currency") === "string" ? (value("currency") as string) : "";
+  const breaks = Array.isArray(value("priceBreaks"))
+    ? (value("priceBreaks") as unknown[])
+        .filter(isRecord)
+        .map((b) => `${String(b.quantity)}+ ${String(b.unitPrice)}`)
+        .join(", ")
+    : "";
+  const stock = num(value("stock"));
+  return [
+    typeof value("supplier") === "string" ? (value("supplier") as string) : null,
+    stock === null ? null : `${stock.toLocaleString("en-GB")} in stock`,
+    breaks ? `${breaks}${currency ? ` ${currency}` : ""}` : null,
+  ]
+    .filter(Boolean)
+    .join(" · ");
 }

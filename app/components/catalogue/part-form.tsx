@@ -23,9 +23,9 @@ function unitHint(spec: ColumnSpec): string | undefined {
   return UNPREFIXED.has(spec.type.dimension) ? `in ${unit}, e.g. ${spec.example}` : `in ${unit} or with a prefix, e.g. ${spec.example}`;
 }
 
-/** Column labels as form labels: first letter capitalised, trade symbols (hFE) left as written. */
+/** Column labels as form labels: first letter capitalised, trade symbols (hFE, fT) left as written. */
 export function labelOf(spec: ColumnSpec): string {
-  return spec.label.startsWith("hFE") ? spec.label : spec.label.charAt(0).toUpperCase() + spec.label.slice(1);
+  return /^[a-z][A-Z]/.test(spec.label) ? spec.label : spec.label.charAt(0).toUpperCase() + spec.label.slice(1);
 }
 
 function FieldInput({ spec, value, error }: { spec: ColumnSpec; value: string; error?: string }) {

@@ -1,7 +1,7 @@
 import { renderToString } from "react-dom/server";
 import { createRoutesStub } from "react-router";
 import { describe, expect, it } from "vitest";
-import { formatFieldValue } from "./field-display.ts";
+import { formatFieldValue, offerSummary } from "./field-display.ts";
 import { FlagList } from "./flags.tsx";
 import { OffersTable, partCaution, RevisionHistory, SaturationTable } from "./part-sections.tsx";
 
@@ -98,5 +98,18 @@ describe("formatFieldValue", () => {
     expect(formatFieldValue("saturationPoints", [{ icAmps: 0.01, ibAmps: 0.0005, vceSatMaxVolts: 0.25, vceSatTypVolts: null, vbeSatVolts: null }])).toBe(
       "VCE(sat) ≤ 250 mV at 10 mA / IB 500 µA",
     );
+  });
+});
+
+describe("offerSummary", () => {
+  it("puts a new offer on one line", () => {
+    expect(
+      offerSummary([
+        { field: "supplier", after: "Larkspur Component Supply" },
+        { field: "stock", after: 12000 },
+        { field: "currency", after: "EUR" },
+        { field: "priceBreaks", after: [{ quantity: 1, unitPrice: 0.12 }, { quantity: 100, unitPrice: 0.085 }] },
+      ]),
+    ).toBe("Larkspur Component Supply · 12,000 in stock · 1+ 0.12, 100+ 0.085 EUR");
   });
 });

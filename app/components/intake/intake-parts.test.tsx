@@ -1,7 +1,7 @@
 import { renderToString } from "react-dom/server";
 import { createRoutesStub } from "react-router";
 import { describe, expect, it } from "vitest";
-import { arrangeProblems, ChangeList, IntakeCountsBar, ProblemsTable } from "./intake-parts.tsx";
+import { arrangeProblems, ChangeList, CountsInline, IntakeCountsBar, ProblemsTable } from "./intake-parts.tsx";
 import type { ShownProblem } from "./types.ts";
 
 function render(element: React.ReactElement): string {
@@ -84,5 +84,15 @@ describe("IntakeCountsBar", () => {
     for (const [key, value] of [["new", 12], ["changed", 1], ["unchanged", 0], ["rejected", 4], ["warnings", 2]] as const) {
       expect(html).toMatch(new RegExp(`data-count="${key}"><dt[^>]*>${key}</dt><dd[^>]*>${value}</dd>`));
     }
+  });
+});
+
+describe("CountsInline", () => {
+  it("leaves zero counts out of the intake list", () => {
+    const html = renderToString(<CountsInline counts={{ new: 87, changed: 0, unchanged: 0, rejected: 4, warnings: 0 }} />);
+    expect(html).toContain(">87 new<");
+    expect(html).toContain("4 rejected");
+    expect(html).not.toContain("changed");
+    expect(renderToString(<CountsInline counts={{ new: 0, changed: 0, unchanged: 0, rejected: 0, warnings: 0 }} />)).toContain("no rows");
   });
 });

@@ -1,6 +1,6 @@
 // Presentational pieces of the intake pages: state, counts, problems, changes.
 import { Link } from "react-router";
-import { fieldLabel, formatFieldValue, inFieldOrder } from "#app/components/catalogue/field-display.ts";
+import { fieldLabel, formatFieldValue, inFieldOrder, offerSummary } from "#app/components/catalogue/field-display.ts";
 import { STATE_LABELS, type IntakeCounts, type IntakeState, type RowChange, type ShownProblem } from "./types.ts";
 
 const STATE_TONES: Record<IntakeState, string> = {
@@ -108,7 +108,7 @@ export function ProblemsTable({
     { value: "warning", label: `Warnings ${warnings}` },
   ];
   const sortHeader = (key: ProblemSort, label: string, className = "") => (
-    <th scope="col" className={`px-3 py-2 font-medium ${className}`} aria-sort={sort === key ? "ascending" : undefined}>
+    <th scope="col" className={`whitespace-nowrap px-3 py-2 font-medium ${className}`} aria-sort={sort === key ? "ascending" : undefined}>
       <Link to={problemsHref(filter, key)} preventScrollReset className="hover:text-signal">
         {label}
         {sort === key ? " ▲" : ""}
@@ -234,7 +234,7 @@ export function ChangeList({ changes, kind }: { changes: readonly RowChange[]; k
                   <td className="px-3 py-1.5">{c.manufacturer}</td>
                   <td className="px-3 py-1.5 font-medium">{c.partNumber}</td>
                   {kind === "offers" ? (
-                    <td className="px-3 py-1.5 text-ink/80">{c.fields.map((f) => `${fieldLabel(f.field)} ${formatFieldValue(f.field, f.after)}`).join(" · ")}</td>
+                    <td className="px-3 py-1.5 text-ink/80">{offerSummary(c.fields)}</td>
                   ) : null}
                 </tr>
               ))}

@@ -1,0 +1,114 @@
+// Catalogue API bench: the built server against a seeded bench database (the demo plus 10,000 generated parts
+// committed through an intake), signed in, then autocannon with 50 loopback connections for 10 s on GET /api/parts.
+// Prints p99 and errors and writes tests/bench/results/catalogue-api-bench.json; asserts nothing.
+// Run: npx react-router build && npx tsx tests/bench/catalogue-api-bench.ts
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { cpus, tmpdir } from "node:os";
+import path from "node:path";
+import autocannon from "autocannon";
+import { createMigrator, createSeeder } from "#db/migrator.ts";
+import { startAppServer } from "#tests/setup/app-server.ts";
+import { connect, dropDatabase, ensureClusterUp, recreateDatabase } from "#tests/setup/databases.ts";
+import { generateCompactPartsCsv, LIBRARIAN } from "#tests/setup/intake-helpers.ts";
+import { signInCodeFrom, startMailCatcher, waitForMail } from "#tests/setup/mail-catcher.ts";
+
+const DATABASE = "betasift_bench_catalogue";
+const EXTRA_PARTS = 10_000;
+const CONNECTIONS = 50;
+const DURATION_S = 10;
+const P99_GOAL_MS = 100;
+const QUERY = "/api/parts?polarity=npn&hfeAt=10mA&hfeMin=50&sort=hfe&dir=desc&size=50&page=2";
+const root = path.resolve(import.meta.dirname, "../..");
+
+/** Just enough of a cookie jar for the two sign-in steps. */
+class Cookies {
+  private values = new Map<string, string>();
+  take(response: Response) {
+    for (const cookie of response.headers.getSetCookie()) {
+      const [pair] = cookie.split(";");
+      const at = pair!.indexOf("=");
+      this.values.set(pair!.slice(0, at), pair!.slice(at + 1));
+    }
+  }
+  header(): string {
+    return [...this.values].map(([k, v]) => `${k}=${v}`).join("; ");
+  }
+}
+
+async function signIn(url: string, mailDir: string, email: string): Promise<string> {
+  const cookies = new Cookies();
+  const since = Date.now();
+  const asked = await fetch(`${url}/sign-in`, { method: "POST", body: new URLSearchParams({ email }), redirect: "manual" });
+  cookies.take(asked);
+  const code = signInCodeFrom(await waitForMail(mailDir, email, since));
+  const verified = await fetch(`${url}/sign-in/verify`, {
+    method: "POST",
+    body: new URLSearchParams({ intent: "verify", code }),
+    headers: { cookie: cookies.header() },
+    redirect: "manual",
+  });
+  cookies.take(verified);
+  if (verified.status !== 302 || verified.headers.get("location") !== "/") throw new Error(`sign-in answered ${verified.status}`);
+  return cookies.header();
+}
+
+async function main() {
+  ensureClusterUp();
+  const url = await recreateDatabase(DATABASE);
+  const setup = connect(url);
+  await createMigrator(setup).up();
+  process.env.DATABASE_URL = url;
+  await createSeeder(setup).up();
+  const [[librarian]] = (await setup.query(`SELECT id FROM users WHERE email = $1`, { bind: [LIBRARIAN] })) as [Array<{ id: string }>, unknown];
+  await setup.close();
+  const { previewIntake, commitIntake } = await import("#app/data/intakes.server.ts");
+  const { closeSequelize } = await import("#db/sequelize.ts");
+  const bytes = new Uint8Array(Buffer.from(generateCompactPartsCsv(EXTRA_PARTS, "Benchmere Devices", "BMD")));
+  const intake = await previewIntake({ kind: "parts", fileName: "bench-catalogue.csv", bytes, uploadedBy: librarian!.id });
+  const committed = await commitIntake(intake.id, librarian!.id, { sendReport: false });
+  if (!committed.ok) throw new Error(committed.message);
+  await closeSequelize();
+
+  const mailDir = mkdtempSync(path.join(tmpdir(), "betasift-bench-mail-"));
+  const catcher = await startMailCatcher(mailDir);
+  const app = await startAppServer({ DATABASE_URL: url, SMTP_PORT: String(catcher.port) });
+  try {
+    const cookie = await signIn(app.url, mailDir, "engineer@larkfield.example.com");
+    const probe = await fetch(`${app.url}${QUERY}`, { headers: { cookie } });
+    const probeBody = (await probe.json()) as { total: number };
+    console.log(`Betasift catalogue API bench (${process.version}, ${cpus()[0]?.model ?? "unknown CPU"})`);
+    console.log(`  GET ${QUERY}: ${probe.status}, ${probeBody.total} matching of ${EXTRA_PARTS + 87} parts`);
+    const result = await autocannon({ url: `${app.url}${QUERY}`, connections: CONNECTIONS, duration: DURATION_S, headers: { cookie } });
+    const errors = result.errors + result.timeouts + result.non2xx;
+    const results = {
+      node: process.version,
+      cpu: cpus()[0]?.model ?? "unknown",
+      parts: EXTRA_PARTS + 87,
+      query: QUERY,
+      connections: CONNECTIONS,
+      durationS: DURATION_S,
+      requests: result.requests.total,
+      requestsPerSecond: result.requests.average,
+      latencyP50Ms: result.latency.p50,
+      latencyP99Ms: result.latency.p99,
+      latencyMaxMs: result.latency.max,
+      errors,
+      p99GoalMs: P99_GOAL_MS,
+    };
+    console.log(`  ${results.requests} requests, ${results.requestsPerSecond} req/s, p50 ${results.latencyP50Ms} ms, max ${results.latencyMaxMs} ms`);
+    console.log(`  p99: ${results.latencyP99Ms} ms (goal ≤ ${P99_GOAL_MS} ms: ${results.latencyP99Ms <= P99_GOAL_MS ? "met" : "MISSED"})`);
+    console.log(`  errors: ${errors} (goal 0: ${errors === 0 ? "met" : "MISSED"})`);
+    mkdirSync(path.join(root, "tests/bench/results"), { recursive: true });
+    writeFileSync(path.join(root, "tests/bench/results/catalogue-api-bench.json"), `${JSON.stringify(results, null, 2)}\n`);
+  } finally {
+    await app.stop();
+    await catcher.stop();
+    rmSync(mailDir, { recursive: true, force: true });
+    await dropDatabase(DATABASE);
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exitCode = 1;
+});
