@@ -98,6 +98,12 @@ async function main() {
     console.log(`  ${results.requests} requests, ${results.requestsPerSecond} req/s, p50 ${results.latencyP50Ms} ms, max ${results.latencyMaxMs} ms`);
     console.log(`  p99: ${results.latencyP99Ms} ms (goal ≤ ${P99_GOAL_MS} ms: ${results.latencyP99Ms <= P99_GOAL_MS ? "met" : "MISSED"})`);
     console.log(`  errors: ${errors} (goal 0: ${errors === 0 ? "met" : "MISSED"})`);
+    if (process.env.BENCH_PROBE) {
+      for (const probePath of ["/api/parts/not-a-uuid", "/api/health"]) {
+        const r = await autocannon({ url: `${app.url}${probePath}`, connections: CONNECTIONS, duration: 5, headers: { cookie } });
+        console.log(`  probe ${probePath}: ${r.requests.average} req/s, p99 ${r.latency.p99} ms`);
+      }
+    }
     mkdirSync(path.join(root, "tests/bench/results"), { recursive: true });
     writeFileSync(path.join(root, "tests/bench/results/catalogue-api-bench.json"), `${JSON.stringify(results, null, 2)}\n`);
   } finally {

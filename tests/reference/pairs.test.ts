@@ -308,3 +308,25 @@ describe("power Darlington QGP_N1 + QPW_N1 bleed resistor against ngspice", () =
     }
   });
 });
+
+describe("NPN Sziklai QGP_N1 + QPW_P1 bleed resistor against ngspice", () => {
+  it("predicts the share of the driver's collector current a 330 Ω bleed takes within 15%", () => {
+    // Reference: ngspice sweep of the Sziklai pair with 330 Ω across the output's base and emitter, read at 0.3 A;
+    // the bleed current is (VCE − v(x)) / R, the driver's collector current comes from its ammeter.
+    const driverPoints = gainPointsOf(simulateDevice("QGP_N1", "npn", PAIR_VCE_VOLTS - 0.7), 1e-6, 0.3);
+    const outputCurve = simulateDevice("QPW_P1", "pnp", PAIR_VCE_VOLTS);
+    const outputPoints = gainPointsOf(outputCurve, 1e-4, 3);
+    const run = simulatePair("sziklai", "QGP_N1", "QPW_P1", "npn", 330, [0.4, 1.3]);
+    const simulated = readAt(run.icAmps, run.innerVolts.map((v, k) => (PAIR_VCE_VOLTS - v) / 330 / run.driverIcAmps[k]), 0.3);
+    const engine = solvePairCurrents({
+      topology: "sziklai",
+      pairIcAmps: 0.3,
+      bleedOhms: 330,
+      outputVbeVolts: readAt(outputCurve.icAmps, outputCurve.vbeVolts, 0.3),
+      driverHfeAt: (ic) => hfeAt(driverPoints, ic, "min") ?? 0,
+      outputHfeAt: (ic) => hfeAt(outputPoints, ic, "min") ?? 0,
+    });
+    expect(engine.bleedShare / simulated).toBeGreaterThan(0.85);
+    expect(engine.bleedShare / simulated).toBeLessThan(1.15);
+  });
+});
