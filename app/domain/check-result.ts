@@ -72,6 +72,49 @@ export function computeMargin(limit: number, demand: number): number {
   return (limit - demand) / limit;
 }
 
+/** One bit per flag, in FLAG_NAMES order, so numeric judgements carry flags without arrays. */
+export const FLAG_BITS: Readonly<Record<FlagName, number>> = {
+  "gain-off-point": 1,
+  "rating-below-supply": 2,
+  "inside-derating": 4,
+  "no-min-gain": 8,
+  "early-unknown": 16,
+  "hot-junction": 32,
+  "drive-short": 64,
+  "sat-too-high": 128,
+  "low-early-voltage": 256,
+  "stale-datasheet": 512,
+};
+
+/** The flags set in a mask, in FLAG_NAMES order. */
+export function flagsOfMask(mask: number): FlagName[] {
+  const flags: FlagName[] = [];
+  for (let i = 0; i < FLAG_NAMES.length; i += 1) if (mask & (1 << i)) flags.push(FLAG_NAMES[i]);
+  return flags;
+}
+
+/** The mask of a flag list. */
+export function maskOfFlags(flags: readonly FlagName[]): number {
+  let mask = 0;
+  for (let i = 0; i < flags.length; i += 1) mask |= FLAG_BITS[flags[i]];
+  return mask;
+}
+
+/** The worse of two verdicts, without building a list. */
+export function worseVerdict(a: Verdict, b: Verdict): Verdict {
+  return VERDICT_RANK[b] > VERDICT_RANK[a] ? b : a;
+}
+
+/**
+ * What every check's numeric judgement carries: no strings beyond the verdict, flags as a mask of
+ * FLAG_BITS. The explanation (formula, inputs, summary) is built from the input and this.
+ */
+export interface Judgement {
+  verdict: Verdict;
+  margin: number | null;
+  flags: number;
+}
+
 /** The union of flag lists in first-seen order, without repeats. */
 export function mergeFlags(...lists: FlagName[][]): FlagName[] {
   return [...new Set(lists.flat())];

@@ -101,7 +101,7 @@ function PointRows({
       <div className="flex items-baseline justify-between border-b border-rule px-4 py-2.5">
         <h2 className="text-sm font-semibold uppercase tracking-wide text-ink/80">{title}</h2>
         <button type="button" onClick={add} className="rounded border border-rule px-2.5 py-1 text-sm hover:bg-paper">
-          + {addLabel}
+          {`+ ${addLabel}`}
         </button>
       </div>
       <div className="overflow-x-auto px-4 py-3">
@@ -165,7 +165,7 @@ export function PartForm({ values, errors, cancelHref }: { values: PartFormValue
         </div>
       ) : Object.keys(errors).length > 0 ? (
         <div role="alert" className="rounded border border-fault/30 bg-fault-soft px-4 py-3 text-sm">
-          {Object.keys(errors).length === 1 ? "One value needs fixing" : `${Object.keys(errors).length} values need fixing`}; nothing was saved.
+          {`${Object.keys(errors).length === 1 ? "One value needs fixing" : `${Object.keys(errors).length} values need fixing`}; nothing was saved.`}
         </div>
       ) : null}
       {SECTIONS.map((section) => (

@@ -262,7 +262,7 @@ export function BeforeAfter({ fields }: { fields: ReadonlyArray<{ field: string;
           <th scope="col" className="w-1/4 px-3 py-1.5 font-medium">
             Field
           </th>
-          <th scope="col" className="px-3 py-1.5 font-medium">
+          <th scope="col" className="w-[35%] px-3 py-1.5 font-medium">
             Before
           </th>
           <th scope="col" className="w-6 px-1 py-1.5" aria-hidden="true" />

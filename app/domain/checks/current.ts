@@ -1,7 +1,7 @@
 // Current check: peak IC against IC max, derated.
-import type { CheckResult } from "../check-result";
+import { type CheckResult, flagsOfMask } from "../check-result";
 import { formatPercent, formatValue } from "./format";
-import { judgeAgainstRating } from "./rating";
+import { newRatingReading, type RatingReading, readRating } from "./rating";
 
 export interface CurrentCheckInput {
   subject?: string;
@@ -12,9 +12,14 @@ export interface CurrentCheckInput {
   currentFraction: number;
 }
 
+export type CurrentJudgement = RatingReading;
+
 /** Peak IC against the derated IC max; above IC max itself fails. */
-export function checkCurrent(input: CurrentCheckInput): CheckResult {
-  const judged = judgeAgainstRating(input.peakIcAmps, input.icMaxAmps, input.currentFraction);
+export function judgeCurrent(input: CurrentCheckInput, out: CurrentJudgement = newRatingReading()): CurrentJudgement {
+  return readRating(input.peakIcAmps, input.icMaxAmps, input.currentFraction, out);
+}
+
+export function explainCurrent(input: CurrentCheckInput, judged: CurrentJudgement): CheckResult {
   const where =
     judged.verdict === "fails" ? "above the absolute maximum" : judged.verdict === "marginal" ? "inside the derating" : "within the derated rating";
   return {
@@ -22,7 +27,7 @@ export function checkCurrent(input: CurrentCheckInput): CheckResult {
     subject: input.subject ?? "part",
     verdict: judged.verdict,
     margin: judged.margin,
-    flags: judged.flags,
+    flags: flagsOfMask(judged.flags),
     formula: `IC(peak) ≤ k(I) × IC(max), k(I) = ${formatPercent(input.currentFraction)}`,
     inputs: [
       { symbol: "IC(peak)", label: "peak collector current", value: input.peakIcAmps, unit: "A" },
@@ -31,4 +36,8 @@ export function checkCurrent(input: CurrentCheckInput): CheckResult {
     ],
     summary: `Peak IC ${formatValue(input.peakIcAmps, "A")} against IC max ${formatValue(input.icMaxAmps, "A")} (derated to ${formatValue(judged.deratedLimit, "A")}): ${where}.`,
   };
+}
+
+export function checkCurrent(input: CurrentCheckInput): CheckResult {
+  return explainCurrent(input, judgeCurrent(input));
 }

@@ -1,5 +1,5 @@
 // Drive check: the base current the device needs against what the source supplies, and a base resistor to fit.
-import type { CheckInput, CheckResult, FlagName, Verdict } from "../check-result";
+import { type CheckInput, type CheckResult, FLAG_BITS, flagsOfMask, type Judgement } from "../check-result";
 import { type ESeriesName, roundToSeries } from "../e-series";
 import type { Drive } from "../requirement";
 import { formatValue } from "./format";
@@ -31,11 +31,41 @@ export interface DriveCheckResult extends CheckResult {
   suggestedBaseOhms: number | null;
 }
 
+export interface DriveJudgement extends Judgement {
+  ibNeededAmps: number;
+  ibAvailableAmps: number;
+  /** Vdrive − VBE for a source drive (may be 0 or below); NaN for a current drive. */
+  headroomVolts: number;
+}
+
+export function newDriveJudgement(): DriveJudgement {
+  return { verdict: "fits", margin: null, flags: 0, ibNeededAmps: 0, ibAvailableAmps: 0, headroomVolts: Number.NaN };
+}
+
 /** IB needed = IC / hFE(worst) (linear) or IC / βforced (switching), against (Vdrive − VBE) / Rsource or the stated IB. */
-export function checkDrive(input: DriveCheckInput): DriveCheckResult {
-  const series = input.series ?? "E12";
+export function judgeDrive(input: DriveCheckInput, out: DriveJudgement = newDriveJudgement()): DriveJudgement {
   const divisor = input.mode === "switching" ? input.forcedGain : input.worstHfe;
   const ibNeededAmps = divisor > 0 ? input.icAmps / divisor : Number.POSITIVE_INFINITY;
+  let ibAvailableAmps: number;
+  if (input.drive.kind === "source") {
+    out.headroomVolts = input.drive.volts - input.vbeVolts;
+    ibAvailableAmps = Math.max(0, out.headroomVolts) / input.drive.sourceOhms;
+  } else {
+    out.headroomVolts = Number.NaN;
+    ibAvailableAmps = input.drive.ibAmps;
+  }
+  const margin = ibAvailableAmps > 0 ? (ibAvailableAmps - ibNeededAmps) / ibAvailableAmps : Number.NEGATIVE_INFINITY;
+  out.ibNeededAmps = ibNeededAmps;
+  out.ibAvailableAmps = ibAvailableAmps;
+  out.verdict = ibAvailableAmps >= ibNeededAmps ? "fits" : "fails";
+  out.flags = out.verdict === "fails" ? FLAG_BITS["drive-short"] : 0;
+  out.margin = Number.isFinite(margin) ? margin : -1;
+  return out;
+}
+
+export function explainDrive(input: DriveCheckInput, judged: DriveJudgement): DriveCheckResult {
+  const series = input.series ?? "E12";
+  const { ibNeededAmps, ibAvailableAmps, verdict } = judged;
   const inputs: CheckInput[] = [
     { symbol: "IC", label: "collector current", value: input.icAmps, unit: "A" },
     input.mode === "switching"
@@ -43,13 +73,11 @@ export function checkDrive(input: DriveCheckInput): DriveCheckResult {
       : { symbol: "hFE(worst)", label: "worst-case hFE at IC", value: input.worstHfe, unit: "" },
     { symbol: "IB(need)", label: "base current needed", value: ibNeededAmps, unit: "A" },
   ];
-  let ibAvailableAmps: number;
   let suggestedBaseOhms: number | null = null;
   let formula: string;
   let extra = "";
   if (input.drive.kind === "source") {
-    const headroom = input.drive.volts - input.vbeVolts;
-    ibAvailableAmps = Math.max(0, headroom) / input.drive.sourceOhms;
+    const headroom = judged.headroomVolts;
     formula = "IB = (Vdrive − VBE) / Rsource ≥ IC / " + (input.mode === "switching" ? "βforced" : "hFE(worst)");
     inputs.push(
       { symbol: "Vdrive", label: "drive voltage", value: input.drive.volts, unit: "V" },
@@ -66,20 +94,16 @@ export function checkDrive(input: DriveCheckInput): DriveCheckResult {
       }
     }
   } else {
-    ibAvailableAmps = input.drive.ibAmps;
     formula = "IB(available) ≥ IC / " + (input.mode === "switching" ? "βforced" : "hFE(worst)");
   }
   inputs.push({ symbol: "IB(avail)", label: "base current the drive supplies", value: ibAvailableAmps, unit: "A" });
-  const margin = ibAvailableAmps > 0 ? (ibAvailableAmps - ibNeededAmps) / ibAvailableAmps : Number.NEGATIVE_INFINITY;
-  const verdict: Verdict = ibAvailableAmps >= ibNeededAmps ? "fits" : "fails";
-  const flags: FlagName[] = verdict === "fails" ? ["drive-short"] : [];
   const verb = verdict === "fits" ? "covers" : "falls short of";
   return {
     check: "drive",
     subject: input.subject ?? "part",
     verdict,
-    margin: Number.isFinite(margin) ? margin : -1,
-    flags,
+    margin: judged.margin,
+    flags: flagsOfMask(judged.flags),
     formula,
     inputs,
     summary: `The drive supplies ${formatValue(ibAvailableAmps, "A")} and ${verb} the ${formatValue(ibNeededAmps, "A")} base current needed.${extra}`,
@@ -87,4 +111,8 @@ export function checkDrive(input: DriveCheckInput): DriveCheckResult {
     ibAvailableAmps,
     suggestedBaseOhms,
   };
+}
+
+export function checkDrive(input: DriveCheckInput): DriveCheckResult {
+  return explainDrive(input, judgeDrive(input));
 }

@@ -1,5 +1,5 @@
 // Voltage gain check: output resistance from the Early voltage and the common-emitter gain into the load.
-import type { CheckInput, CheckResult, FlagName, Verdict } from "../check-result";
+import { type CheckInput, type CheckResult, FLAG_BITS, flagsOfMask, type Judgement } from "../check-result";
 import { thermalVoltage } from "../constants";
 import { formatValue } from "./format";
 
@@ -31,10 +31,44 @@ export function intrinsicParameters(icAmps: number, vceVolts: number, earlyVolts
   return { vtVolts, gmSiemens, roOhms, intrinsicGain: gmSiemens * roOhms };
 }
 
+export interface VoltageGainJudgement extends Judgement {
+  vtVolts: number;
+  gmSiemens: number;
+  /** gm × (RC ∥ ro), or the upper bound gm × RC when VA is unknown. */
+  gain: number;
+  /** NaN when VA is unknown. */
+  roOhms: number;
+}
+
+export function newVoltageGainJudgement(): VoltageGainJudgement {
+  return { verdict: "fits", margin: null, flags: 0, vtVolts: 0, gmSiemens: 0, gain: 0, roOhms: Number.NaN };
+}
+
 /** Common-emitter gain against the gain required; an unknown Early voltage gives an upper bound only (marginal). */
-export function checkVoltageGain(input: VoltageGainCheckInput): CheckResult {
+export function judgeVoltageGain(input: VoltageGainCheckInput, out: VoltageGainJudgement = newVoltageGainJudgement()): VoltageGainJudgement {
   const vtVolts = thermalVoltage(input.tempC);
   const gmSiemens = input.icAmps / vtVolts;
+  out.vtVolts = vtVolts;
+  out.gmSiemens = gmSiemens;
+  if (input.earlyVolts == null) {
+    out.flags = FLAG_BITS["early-unknown"];
+    out.roOhms = Number.NaN;
+    out.gain = gmSiemens * input.loadOhms;
+  } else {
+    const roOhms = (input.earlyVolts + input.vceVolts) / input.icAmps;
+    out.roOhms = roOhms;
+    out.gain = gmSiemens * ((input.loadOhms * roOhms) / (input.loadOhms + roOhms));
+    const highGain = input.hfe != null && input.hfe >= HIGH_GAIN_HFE;
+    // ro costing more than a tenth of the gain is a visible loss whatever the part's hFE (common practice).
+    out.flags = (highGain && input.earlyVolts < LOW_EARLY_VOLTS) || roOhms < 10 * input.loadOhms ? FLAG_BITS["low-early-voltage"] : 0;
+  }
+  out.margin = (out.gain - input.requiredVoltageGain) / out.gain;
+  out.verdict = out.gain < input.requiredVoltageGain ? "fails" : input.earlyVolts == null ? "marginal" : "fits";
+  return out;
+}
+
+export function explainVoltageGain(input: VoltageGainCheckInput, judged: VoltageGainJudgement): CheckResult {
+  const { vtVolts, gmSiemens, gain, roOhms } = judged;
   const inputs: CheckInput[] = [
     { symbol: "IC", label: "collector current", value: input.icAmps, unit: "A" },
     { symbol: "VT", label: "thermal voltage kT/q", value: vtVolts, unit: "V" },
@@ -42,39 +76,31 @@ export function checkVoltageGain(input: VoltageGainCheckInput): CheckResult {
     { symbol: "RC", label: "collector load", value: input.loadOhms, unit: "Ω" },
     { symbol: "Av(req)", label: "voltage gain required", value: input.requiredVoltageGain, unit: "" },
   ];
-  const flags: FlagName[] = [];
-  let gain: number;
   let sentence: string;
   if (input.earlyVolts == null) {
-    flags.push("early-unknown");
-    gain = gmSiemens * input.loadOhms;
     sentence = `No Early voltage is quoted; without ro the gain can reach at most gm × RC = ${formatValue(gain, "")}`;
   } else {
-    const roOhms = (input.earlyVolts + input.vceVolts) / input.icAmps;
-    const parallel = (input.loadOhms * roOhms) / (input.loadOhms + roOhms);
-    gain = gmSiemens * parallel;
     inputs.push(
       { symbol: "VA", label: "Early voltage", value: input.earlyVolts, unit: "V" },
       { symbol: "VCE", label: "VCE at the operating point", value: input.vceVolts, unit: "V" },
       { symbol: "ro", label: "output resistance (VA + VCE) / IC", value: roOhms, unit: "Ω" },
       { symbol: "gm·ro", label: "intrinsic gain", value: gmSiemens * roOhms, unit: "" },
     );
-    const highGain = input.hfe != null && input.hfe >= HIGH_GAIN_HFE;
-    // ro costing more than a tenth of the gain is a visible loss whatever the part's hFE (common practice).
-    if ((highGain && input.earlyVolts < LOW_EARLY_VOLTS) || roOhms < 10 * input.loadOhms) flags.push("low-early-voltage");
     sentence = `gm × (RC ∥ ro) = ${formatValue(gain, "")} with ro = ${formatValue(roOhms, "Ω")}`;
   }
   inputs.push({ symbol: "Av", label: "common-emitter voltage gain", value: gain, unit: "" });
-  const margin = (gain - input.requiredVoltageGain) / gain;
-  const verdict: Verdict = gain < input.requiredVoltageGain ? "fails" : input.earlyVolts == null ? "marginal" : "fits";
   return {
     check: "voltage-gain",
     subject: input.subject ?? "part",
-    verdict,
-    margin,
-    flags,
+    verdict: judged.verdict,
+    margin: judged.margin,
+    flags: flagsOfMask(judged.flags),
     formula: "Av = gm × (RC ∥ ro), gm = IC / VT, ro = (VA + VCE) / IC, VT = kT/q",
     inputs,
     summary: `${sentence}, against ${formatValue(input.requiredVoltageGain, "")} required.`,
   };
+}
+
+export function checkVoltageGain(input: VoltageGainCheckInput): CheckResult {
+  return explainVoltageGain(input, judgeVoltageGain(input));
 }
