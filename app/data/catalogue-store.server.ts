@@ -54,6 +54,13 @@ export function rowToPart(row: PartRow): CataloguePart {
   return { id: row.id, ...(spec as unknown as PartSpec) };
 }
 
+/** Sorts a spec's point lists where they are (for specs this code just parsed or decoded and owns). */
+export function normaliseSpecInPlace(spec: PartSpec): PartSpec {
+  spec.gainPoints.sort((a, b) => a.icAmps - b.icAmps);
+  spec.saturationPoints.sort((a, b) => a.icAmps - b.icAmps);
+  return spec;
+}
+
 /** A spec with its point lists sorted, as stored and as recorded in revisions. */
 export function normaliseSpec(spec: PartSpec): PartSpec {
   return { ...spec, gainPoints: sortedPoints(spec.gainPoints), saturationPoints: sortedPoints(spec.saturationPoints) };
@@ -265,8 +272,8 @@ export async function bumpCatalogueVersion(transaction: Transaction): Promise<vo
   await db().sequelize.query(`UPDATE catalogue_version SET version = version + 1, changed_at = clock_timestamp() WHERE id = 1`, { transaction });
 }
 
-export async function readCatalogueVersion(): Promise<number> {
-  const [row] = await db().sequelize.query<{ version: string }>(`SELECT version FROM catalogue_version WHERE id = 1`, { type: QueryTypes.SELECT });
+export async function readCatalogueVersion(transaction?: Transaction): Promise<number> {
+  const [row] = await db().sequelize.query<{ version: string }>(`SELECT version FROM catalogue_version WHERE id = 1`, { type: QueryTypes.SELECT, transaction });
   return Number(row?.version ?? 0);
 }
 

@@ -8,7 +8,7 @@ import { parseIntakeFile } from "#app/domain/intake/parse-intake.ts";
 import { countRejectedRows, hasFileError, type IntakeKind, type IntakeProblem, type IntakeRow } from "#app/domain/intake/problems.ts";
 import { partKey, type Offer, type PartSpec } from "#app/domain/part.ts";
 import { db } from "#app/lib/db.server.ts";
-import { queueIntakeReport } from "#app/lib/jobs.server.ts";
+import { queueIntakeReport, startJobs } from "#app/lib/jobs.server.ts";
 import {
   bumpCatalogueVersion,
   decodeSpec,
@@ -19,7 +19,8 @@ import {
   insertPartRevisions,
   insertParts,
   lockCatalogue,
-  normaliseSpec,
+  normaliseSpecInPlace,
+  readCatalogueVersion,
   OFFER_SELECT,
   rowToOffer,
   specOf,
@@ -95,11 +96,12 @@ interface IntakeSql {
   rejected_count: number;
   warning_count: number;
   problem_count: number;
+  compared_at_version: string;
 }
 
 const INTAKE_SELECT = `i.id, i.kind, i.file_name, i.size_bytes, i.state, i.file_refused, i.uploaded_by, u.display_name AS uploader_name,
   i.created_at, i.committed_at, i.discarded_at, i.rolled_back_at, i.new_count, i.changed_count, i.unchanged_count,
-  i.rejected_count, i.warning_count, i.problem_count`;
+  i.rejected_count, i.warning_count, i.problem_count, i.compared_at_version`;
 
 const iso = (value: Date | null) => (value ? new Date(value).toISOString() : null);
 
@@ -160,13 +162,22 @@ interface Comparison {
   extraProblems: IntakeProblem[];
 }
 
-async function compareParts(rows: ReadonlyArray<IntakeRow<PartSpec>>, transaction?: Transaction): Promise<Comparison & { existing: Map<string, { id: string; spec: PartSpec }> }> {
-  const normal = rows.map(({ row, value }) => ({ row, value: normaliseSpec(value) }));
+type ExistingParts = Map<string, { id: string; spec: PartSpec }>;
+
+async function findExisting(specs: readonly PartSpec[], transaction?: Transaction): Promise<ExistingParts> {
+  const existing: ExistingParts = new Map();
+  for (const [key, part] of await findPartsByKeys(specs, transaction)) existing.set(key, { id: part.id, spec: specOf(part) });
+  return existing;
+}
+
+/** Rows the parse (or the stored preview) owns: their point lists are sorted where they are. */
+async function compareParts(rows: ReadonlyArray<IntakeRow<PartSpec>>, transaction?: Transaction): Promise<Comparison & { existing: ExistingParts }> {
+  const normal = rows.map(({ row, value }) => ({ row, value: normaliseSpecInPlace(value) }));
   const found = await findPartsByKeys(
     normal.map((r) => r.value),
     transaction,
   );
-  const existing = new Map<string, { id: string; spec: PartSpec }>();
+  const existing: ExistingParts = new Map();
   const specs = new Map<string, PartSpec>();
   for (const [key, part] of found) {
     existing.set(key, { id: part.id, spec: specOf(part) });
@@ -223,6 +234,7 @@ async function compareOffers(
 
 /** Parses and compares an uploaded file, storing the file, its problems and its rows; the catalogue is not touched. */
 export async function previewIntake(input: { kind: IntakeKind; fileName: string; bytes: Uint8Array; uploadedBy: string }): Promise<IntakeView> {
+  const comparedAtVersion = await readCatalogueVersion();
   const parsed = parseIntakeFile(input.kind, input.bytes);
   const fileRefused = hasFileError(parsed.problems);
   const comparison: Comparison =
@@ -233,8 +245,8 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
   await sequelize.transaction(async (transaction) => {
     await sequelize.query(
       `INSERT INTO intakes (id, kind, file_name, size_bytes, file_bytes, uploaded_by, state, file_refused, new_count, changed_count,
-         unchanged_count, rejected_count, warning_count, problem_count, parsed_rows, created_at, updated_at)
-       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, $14, clock_timestamp(), clock_timestamp())`,
+         unchanged_count, rejected_count, warning_count, problem_count, parsed_rows, compared_at_version, created_at, updated_at)
+       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, $14, $15, clock_timestamp(), clock_timestamp())`,
       {
         bind: [
           id,
@@ -251,6 +263,7 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
           problems.filter((p) => p.severity === "warning").length,
           problems.length,
           encodeRows(parsed.kind, comparison.rows),
+          comparedAtVersion,
         ],
         transaction,
       },
@@ -277,6 +290,8 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
 // ---- reads ------------------------------------------------------------------------------------
 
 export async function listIntakes(): Promise<IntakeView[]> {
+  // A librarian looking at intakes starts this process's queue workers, so reports queued before a restart go out.
+  void startJobs().catch((error: unknown) => console.error(`job queue did not start: ${error instanceof Error ? error.message : String(error)}`));
   const rows = await db().sequelize.query<IntakeSql>(
     `SELECT ${INTAKE_SELECT} FROM intakes i LEFT JOIN users u ON u.id = i.uploaded_by ORDER BY i.created_at DESC LIMIT 500`,
     { type: QueryTypes.SELECT },
@@ -386,13 +401,31 @@ async function refreshStoredRows(intake: IntakeSql, preview: readonly ComparedRo
   await db().sequelize.query(`UPDATE intakes SET parsed_rows = $2 WHERE id = $1`, { bind: [intake.id, encodeRows(intake.kind, now)], transaction });
 }
 
-async function commitParts(intake: IntakeSql, byUserId: string, transaction: Transaction): Promise<Comparison["counts"]> {
-  const preview = await readStoredRows(intake, transaction);
-  // Compared again against the catalogue as it is now: it may have changed since the preview.
-  const comparison = await compareParts(
-    preview.map((r) => ({ row: r.row, value: r.value as PartSpec })),
+/** True when no commit, rollback or edit happened since the preview compared (the caller holds the catalogue lock). */
+async function catalogueUnchangedSince(intake: IntakeSql, transaction: Transaction): Promise<boolean> {
+  return (await readCatalogueVersion(transaction)) === Number(intake.compared_at_version);
+}
+
+/** The preview's comparison as stored; only the parts it found need reading again (for their ids and values). */
+async function reusePartsComparison(preview: ComparedRowRecord[], transaction: Transaction): Promise<Comparison & { existing: ExistingParts }> {
+  const counts = { new: 0, changed: 0, unchanged: 0 };
+  for (const row of preview) counts[row.status] += 1;
+  const existing = await findExisting(
+    preview.filter((r) => r.status !== "new").map((r) => r.value as PartSpec),
     transaction,
   );
+  return { rows: preview, counts, extraProblems: [], existing };
+}
+
+async function commitParts(intake: IntakeSql, byUserId: string, transaction: Transaction): Promise<Comparison["counts"]> {
+  const preview = await readStoredRows(intake, transaction);
+  const comparison = (await catalogueUnchangedSince(intake, transaction))
+    ? await reusePartsComparison(preview, transaction)
+    : // Compared again against the catalogue as it is now: it changed since the preview.
+      await compareParts(
+        preview.map((r) => ({ row: r.row, value: r.value as PartSpec })),
+        transaction,
+      );
   const created: Array<{ id: string; spec: PartSpec }> = [];
   const changed: Array<{ id: string; spec: PartSpec }> = [];
   const revisions: PartRevisionInsert[] = [];

@@ -1,16 +1,32 @@
 // Darlington and Sziklai pairs from two catalogue parts: each device at its own current, checked on its own numbers.
-import { type CheckResult, type FlagName, mergeFlags, type Verdict, worstVerdict } from "./check-result";
-import { checkBandwidth } from "./checks/bandwidth";
-import { checkCurrent } from "./checks/current";
-import { checkDrive } from "./checks/drive";
+import { type CheckResult, FLAG_BITS, type FlagName, type Judgement, mergeFlags, type Verdict, worseVerdict } from "./check-result";
+import { type BandwidthCheckInput, type BandwidthJudgement, explainBandwidth, judgeBandwidth } from "./checks/bandwidth";
+import { type CurrentCheckInput, type CurrentJudgement, explainCurrent, judgeCurrent } from "./checks/current";
+import { type DriveCheckInput, type DriveJudgement, explainDrive, judgeDrive } from "./checks/drive";
 import { formatValue } from "./checks/format";
-import { checkGain, type GainAtCurrent } from "./checks/gain";
-import { checkSaturation } from "./checks/saturation";
-import { checkThermal } from "./checks/thermal";
-import { checkVoltage } from "./checks/voltage";
-import { assessDataQuality } from "./data-quality";
+import { explainGain, type GainAtCurrent, type GainJudgement, judgeGain } from "./checks/gain";
+import { explainSaturation, judgeSaturation, type SaturationCheckInput, type SaturationJudgement } from "./checks/saturation";
+import { explainThermal, judgeThermal, type ThermalCheckInput, type ThermalJudgement } from "./checks/thermal";
+import { explainVoltage, judgeVoltage, type VoltageCheckInput, type VoltageJudgement } from "./checks/voltage";
+import { assessDataQuality, type DataQuality } from "./data-quality";
 import { chooseVbe, DEFAULT_VCE_SAT_VOLTS, type EvaluateOptions, findExclusions } from "./evaluate-part";
-import { DEFAULT_TYP_TO_MIN_FACTOR, type GainCorner, type GainEstimate, hfeAt, type SaturationEstimate, vceSatAt, type WorstCaseGainOptions, worstCaseGain } from "./gain-curve";
+import {
+  DEFAULT_GAIN_WINDOW_DECADES,
+  DEFAULT_TYP_TO_MIN_FACTOR,
+  explainGainReading,
+  type GainCorner,
+  type GainEstimate,
+  type GainReading,
+  hfeAt,
+  newGainReading,
+  type PreparedGain,
+  prepareGain,
+  readWorstCaseGain,
+  type SaturationEstimate,
+  vceSatAt,
+  type WorstCaseGainOptions,
+  worstCaseGain,
+} from "./gain-curve";
 import type { GainPoint, PartSpec, Polarity } from "./part";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
 
@@ -290,43 +306,39 @@ const TOPOLOGY_BETA_FORMULA: Record<CompoundTopology, string> = {
 };
 
 
-/** The pair's gain as one estimate, so the single-device gain check can judge it. */
-function pairGainEstimate(currents: PairCurrents, driverGain: GainEstimate, outputGain: GainEstimate): GainEstimate {
-  const sources = [driverGain.source, outputGain.source];
-  const source = !currents.feasible || sources.includes("none") ? "none" : (sources.find((s) => s !== "min") ?? "min");
+/** The pair's gain as one reading, so the single-device gain judgement can judge it. */
+function pairGainReading(currents: PairCurrents, driverGain: GainReading, outputGain: GainReading): GainReading {
+  const anyNone = !currents.feasible || driverGain.source === "none" || outputGain.source === "none";
+  const source = anyNone ? "none" : driverGain.source !== "min" ? driverGain.source : outputGain.source;
   return {
     hfe: currents.feasible ? currents.pairHfe : 0,
     source,
     typToMinFactor: driverGain.typToMinFactor ?? outputGain.typToMinFactor,
-    flags: mergeFlags(driverGain.flags, outputGain.flags),
+    flags: mergeFlags([...driverGain.flags], [...outputGain.flags]),
     decadesOffPoint: Math.max(driverGain.decadesOffPoint, outputGain.decadesOffPoint),
-    note:
-      `pair β from β1 ${formatValue(currents.driverHfe, "")} at IC1 ${formatValue(currents.driverIcAmps, "A")} (${driverGain.note}) ` +
-      `and β2 ${formatValue(currents.outputHfe, "")} at IC2 ${formatValue(currents.outputIcAmps, "A")} (${outputGain.note})`,
   };
 }
 
-function thermalFor(part: PartSpec, role: PairRole, sheet: RequirementSheet, vceVolts: number, icAmps: number): CheckResult {
-  const switching = sheet.mode === "switching";
-  return checkThermal({
-    subject: role,
-    mode: sheet.mode,
-    vceVolts,
-    icAmps,
-    dutyCycle: switching ? sheet.dutyCycle : 1,
-    ambientC: sheet.ambientC,
-    rthJaCPerW: part.rthJaCPerW,
-    rthJcCPerW: part.rthJcCPerW,
-    heatsinkRthCPerW: sheet.heatsinkRthCPerW,
-    tjMaxC: part.tjMaxC,
-    ptotWatts: part.ptotWatts,
-    ptotReference: part.ptotReference,
-    derating: sheet.derating,
-  });
+/** The pair's gain at one of the circuit's currents: the solved currents and each device's reading there. */
+interface PairGainAt {
+  icAmps: number;
+  currents: PairCurrents;
+  driver: GainReading;
+  output: GainReading;
+  pair: GainReading;
 }
 
-function inputValue(check: CheckResult, symbol: string): number | null {
-  return check.inputs.find((input) => input.symbol === symbol)?.value ?? null;
+/** The pair's gain reading with its note, naming each device's own current and gain. */
+function explainPairGain(at: PairGainAt): GainEstimate {
+  const driverGain = explainGainReading(at.driver);
+  const outputGain = explainGainReading(at.output);
+  return {
+    ...at.pair,
+    flags: [...at.pair.flags],
+    note:
+      `pair β from β1 ${formatValue(at.currents.driverHfe, "")} at IC1 ${formatValue(at.currents.driverIcAmps, "A")} (${driverGain.note}) ` +
+      `and β2 ${formatValue(at.currents.outputHfe, "")} at IC2 ${formatValue(at.currents.outputIcAmps, "A")} (${outputGain.note})`,
+  };
 }
 
 /** Why a pair lies outside the sheet: the pair's polarity, and each device's package. */
@@ -343,18 +355,87 @@ export function findCompoundExclusions(driver: PartSpec, output: PartSpec, sheet
   return reasons;
 }
 
+/** One device's own judgements inside a pair, with the inputs they read. */
+interface DeviceScreen<P extends PartSpec> {
+  role: PairRole;
+  part: P;
+  icAmps: number;
+  peakIcAmps: number;
+  gain: GainReading;
+  vbe: { volts: number; assumed: boolean };
+  vceVolts: number;
+  voltageInput: VoltageCheckInput;
+  voltage: VoltageJudgement;
+  currentInput: CurrentCheckInput;
+  current: CurrentJudgement;
+  thermalInput: ThermalCheckInput;
+  thermal: ThermalJudgement;
+}
+
+/** Every judgement of a pair with the inputs each read: numbers only, for the search to score pairs without explaining them. */
+export interface CompoundScreen<P extends PartSpec = PartSpec> {
+  topology: CompoundTopology;
+  sheet: RequirementSheet;
+  verdict: Verdict;
+  /** The tightest margin of any check; null when none gives one. */
+  margin: number | null;
+  /** Every check's flags and stale-datasheet, as a mask of FLAG_BITS. */
+  flags: number;
+  /** The lower data-quality score of the two devices. */
+  dataQualityScore: number;
+  bleedOhms: number | null;
+  operating: PairCurrents;
+  withoutBleed: PairCurrents;
+  pairVbeVolts: number;
+  gains: PairGainAt[];
+  gain: GainJudgement;
+  drive: { input: DriveCheckInput; judged: DriveJudgement } | null;
+  saturation: { input: SaturationCheckInput; judged: SaturationJudgement } | null;
+  pairSat: SaturationEstimate | null;
+  /** The sheet asks for a voltage gain, which is not modelled for pairs: marginal. */
+  voltageGainUnmodelled: boolean;
+  bandwidth: { input: BandwidthCheckInput; judged: BandwidthJudgement } | null;
+  devices: { driver: DeviceScreen<P>; output: DeviceScreen<P> };
+  quality: [DataQuality, DataQuality];
+}
+
+function foldInto(screen: { verdict: Verdict; margin: number | null; flags: number }, judged: Judgement): void {
+  screen.verdict = worseVerdict(screen.verdict, judged.verdict);
+  if (judged.margin !== null) screen.margin = screen.margin === null ? judged.margin : Math.min(screen.margin, judged.margin);
+  screen.flags |= judged.flags;
+}
+
+function thermalInputFor(part: PartSpec, role: PairRole, sheet: RequirementSheet, vceVolts: number, icAmps: number): ThermalCheckInput {
+  const switching = sheet.mode === "switching";
+  return {
+    subject: role,
+    mode: sheet.mode,
+    vceVolts,
+    icAmps,
+    dutyCycle: switching ? sheet.dutyCycle : 1,
+    ambientC: sheet.ambientC,
+    rthJaCPerW: part.rthJaCPerW,
+    rthJcCPerW: part.rthJcCPerW,
+    heatsinkRthCPerW: sheet.heatsinkRthCPerW,
+    tjMaxC: part.tjMaxC,
+    ptotWatts: part.ptotWatts,
+    ptotReference: part.ptotReference,
+    derating: sheet.derating,
+  };
+}
+
 /**
- * Evaluates a Darlington or Sziklai pair against the sheet. Each device runs at its own current
- * (solved by solvePairCurrents) and gets its own voltage, current and thermal checks; the pair's
- * gain, drive, saturation and bandwidth are judged on the pair's own numbers.
+ * Judges a Darlington or Sziklai pair against the sheet. Each device runs at its own current
+ * (solved by solvePairCurrents) and gets its own voltage, current and thermal judgements; the pair's
+ * gain, drive, saturation and bandwidth are judged on the pair's own numbers. No explanation is built.
  */
-export function evaluateCompound<P extends PartSpec>(
+export function screenCompound<P extends PartSpec>(
   topology: CompoundTopology,
   driver: P,
   output: P,
   sheet: RequirementSheet,
   options: CompoundOptions = {},
-): CompoundEvaluation<P> {
+): CompoundScreen<P> {
   if (!canPair(topology, driver, output)) {
     throw new RangeError(`a ${topology} pair needs ${topology === "darlington" ? "one polarity" : "opposite polarities"}`);
   }
@@ -363,6 +444,11 @@ export function evaluateCompound<P extends PartSpec>(
   const icAmps = sheet.operatingIcAmps;
   const peakIcAmps = peakIcOf(sheet);
   const peakVceVolts = peakVceOf(sheet);
+  const factor = options.typToMinFactor ?? DEFAULT_TYP_TO_MIN_FACTOR;
+  const windowDecades = options.windowDecades ?? DEFAULT_GAIN_WINDOW_DECADES;
+  const driverGains = prepareGain(driver.gainPoints);
+  const outputGains = prepareGain(output.gainPoints);
+  const readGain = (gains: PreparedGain, current: number) => readWorstCaseGain(gains, current, factor, windowDecades, newGainReading());
   // The output is never saturated in either pair, so its VBE is VBE(on) even when switching.
   const outputVbe = chooseVbe(output, icAmps, "linear");
   const driverHfeAt = worstGainModel(driver, options);
@@ -373,30 +459,28 @@ export function evaluateCompound<P extends PartSpec>(
   const operating = solve(icAmps, bleedOhms);
   const peak = peakIcAmps === icAmps ? operating : solve(peakIcAmps, bleedOhms);
   const withoutBleed = bleedOhms === null ? operating : solve(icAmps, null);
-  const driverGain = worstCaseGain(driver.gainPoints, operating.driverIcAmps, options);
-  const outputGain = worstCaseGain(output.gainPoints, operating.outputIcAmps, options);
+  const driverGain = readGain(driverGains, operating.driverIcAmps);
+  const outputGain = readGain(outputGains, operating.outputIcAmps);
   const driverVbe = chooseVbe(driver, operating.driverIcAmps, sheet.mode);
   const pairVbeVolts = compoundVbe(topology, driverVbe.volts, outputVbe.volts);
+  const screen = { verdict: "fits" as Verdict, margin: null as number | null, flags: 0 };
 
   const gainCurrents = [...new Set([minIcOf(sheet), icAmps, peakIcAmps])];
-  const gains: GainAtCurrent[] = gainCurrents.map((current) => {
+  const gains: PairGainAt[] = gainCurrents.map((current) => {
     const currents = current === icAmps ? operating : current === peakIcAmps ? peak : solve(current, bleedOhms);
-    const estimate = pairGainEstimate(
-      currents,
-      worstCaseGain(driver.gainPoints, currents.driverIcAmps, options),
-      worstCaseGain(output.gainPoints, currents.outputIcAmps, options),
-    );
-    return { icAmps: current, estimate };
+    const driverAt = readGain(driverGains, currents.driverIcAmps);
+    const outputAt = readGain(outputGains, currents.outputIcAmps);
+    return { icAmps: current, currents, driver: driverAt, output: outputAt, pair: pairGainReading(currents, driverAt, outputAt) };
   });
-  const pairChecks: CheckResult[] = [
-    { ...checkGain({ requiredHfe: sheet.requiredHfe ?? (switching ? sheet.forcedGain : null), gains }), subject: "pair" },
-  ];
+  const gain = judgeGain({ requiredHfe: sheet.requiredHfe ?? (switching ? sheet.forcedGain : null), gains: gains.map((g) => ({ icAmps: g.icAmps, estimate: g.pair })) });
+  foldInto(screen, gain);
 
   let drivenForcedGain = sheet.forcedGain;
+  let drive: CompoundScreen<P>["drive"] = null;
   if (sheet.drive != null) {
     // Switching saturates the driver at the sheet's forced gain; the output takes what the driver's emitter gives.
     const pairForcedGain = operating.feasible ? (icAmps * sheet.forcedGain) / operating.driverIcAmps : sheet.forcedGain;
-    const drive = checkDrive({
+    const input: DriveCheckInput = {
       subject: "pair",
       mode: sheet.mode,
       icAmps,
@@ -406,30 +490,139 @@ export function evaluateCompound<P extends PartSpec>(
       vbeAssumed: driverVbe.assumed || outputVbe.assumed,
       drive: sheet.drive,
       series: options.series,
-    });
-    pairChecks.push(drive);
-    drivenForcedGain = drive.ibAvailableAmps > 0 ? operating.driverIcAmps / drive.ibAvailableAmps : Number.POSITIVE_INFINITY;
+    };
+    drive = { input, judged: judgeDrive(input) };
+    foldInto(screen, drive.judged);
+    drivenForcedGain = drive.judged.ibAvailableAmps > 0 ? operating.driverIcAmps / drive.judged.ibAvailableAmps : Number.POSITIVE_INFINITY;
   }
 
   let driverSat: SaturationEstimate | null = null;
   let pairSat: SaturationEstimate | null = null;
+  let saturation: CompoundScreen<P>["saturation"] = null;
   if (switching) {
     driverSat = operating.feasible ? vceSatAt(driver.saturationPoints, operating.driverIcAmps) : null;
     pairSat = driverSat === null ? null : { ...driverSat, volts: compoundVceSat(driverSat.volts, outputVbe.volts) };
-    pairChecks.push(
-      checkSaturation({
-        subject: "pair",
-        icAmps,
-        drivenForcedGain,
-        worstHfe: operating.driverHfe,
-        saturation: pairSat,
-        allowedSatDropVolts: sheet.allowedSatDropVolts,
-      }),
-    );
+    const input: SaturationCheckInput = {
+      subject: "pair",
+      icAmps,
+      drivenForcedGain,
+      worstHfe: operating.driverHfe,
+      saturation: pairSat,
+      allowedSatDropVolts: sheet.allowedSatDropVolts,
+    };
+    saturation = { input, judged: judgeSaturation(input) };
+    foldInto(screen, saturation.judged);
   }
 
   const gainNeeded = sheet.requiredVoltageGain ?? sheet.requiredHfe;
-  if (!switching && sheet.requiredVoltageGain != null && sheet.loadOhms != null) {
+  const voltageGainUnmodelled = !switching && sheet.requiredVoltageGain != null && sheet.loadOhms != null;
+  if (voltageGainUnmodelled) screen.verdict = worseVerdict(screen.verdict, "marginal");
+  let bandwidth: CompoundScreen<P>["bandwidth"] = null;
+  if (sheet.bandwidthHz != null && gainNeeded != null) {
+    // The pair is no faster than its slower device.
+    const ftHz = driver.ftHz === null || output.ftHz === null ? null : Math.min(driver.ftHz, output.ftHz);
+    const input: BandwidthCheckInput = { subject: "pair", ftHz, bandwidthHz: sheet.bandwidthHz, gainNeeded };
+    bandwidth = { input, judged: judgeBandwidth(input) };
+    foldInto(screen, bandwidth.judged);
+  }
+
+  const satVolts = driverSat?.volts ?? sheet.allowedSatDropVolts ?? DEFAULT_VCE_SAT_VOLTS;
+  const driverVce = switching ? satVolts : Math.max(0, operatingVceOf(sheet) - outputVbe.volts);
+  const outputVce = switching ? compoundVceSat(satVolts, outputVbe.volts) : operatingVceOf(sheet);
+  const deviceOf = (role: PairRole, part: P, gainAt: GainReading, vbe: { volts: number; assumed: boolean }, ownIc: number, ownPeakIc: number, vceVolts: number): DeviceScreen<P> => {
+    const voltageInput: VoltageCheckInput = {
+      subject: role,
+      // When the pair is off VBE2 collapses, so the driver too stands the full VCE.
+      peakVceVolts,
+      vceoVolts: part.vceoVolts,
+      reverseVbeVolts: role === "driver" ? sheet.reverseVbeVolts : null,
+      veboVolts: part.veboVolts,
+      voltageFraction: sheet.derating.voltageFraction,
+    };
+    const currentInput: CurrentCheckInput = { subject: role, peakIcAmps: ownPeakIc, icMaxAmps: part.icMaxAmps, currentFraction: sheet.derating.currentFraction };
+    const thermalInput = thermalInputFor(part, role, sheet, vceVolts, ownIc);
+    const device: DeviceScreen<P> = {
+      role,
+      part,
+      icAmps: ownIc,
+      peakIcAmps: ownPeakIc,
+      gain: gainAt,
+      vbe,
+      vceVolts,
+      voltageInput,
+      voltage: judgeVoltage(voltageInput),
+      currentInput,
+      current: judgeCurrent(currentInput),
+      thermalInput,
+      thermal: judgeThermal(thermalInput),
+    };
+    foldInto(screen, device.voltage);
+    foldInto(screen, device.current);
+    foldInto(screen, device.thermal);
+    return device;
+  };
+  const feasibleOr = (value: number, fallback: number) => (Number.isFinite(value) ? value : fallback);
+  const driverDevice = deviceOf("driver", driver, driverGain, driverVbe, feasibleOr(operating.driverIcAmps, 0), feasibleOr(peak.driverIcAmps, 0), driverVce);
+  const outputDevice = deviceOf("output", output, outputGain, outputVbe, feasibleOr(operating.outputIcAmps, icAmps), feasibleOr(peak.outputIcAmps, peakIcAmps), outputVce);
+
+  const quality: [DataQuality, DataQuality] = [assessDataQuality(driver, options), assessDataQuality(output, options)];
+  if (quality[0].flags.includes("stale-datasheet") || quality[1].flags.includes("stale-datasheet")) screen.flags |= FLAG_BITS["stale-datasheet"];
+  return {
+    topology,
+    sheet,
+    verdict: screen.verdict,
+    margin: screen.margin,
+    flags: screen.flags,
+    dataQualityScore: Math.min(quality[0].score, quality[1].score),
+    bleedOhms,
+    operating,
+    withoutBleed,
+    pairVbeVolts,
+    gains,
+    gain,
+    drive,
+    saturation,
+    pairSat,
+    voltageGainUnmodelled,
+    bandwidth,
+    devices: { driver: driverDevice, output: outputDevice },
+    quality,
+  };
+}
+
+function explainDevice<P extends PartSpec>(device: DeviceScreen<P>): DeviceInPair<P> {
+  return {
+    role: device.role,
+    part: device.part,
+    icAmps: device.icAmps,
+    peakIcAmps: device.peakIcAmps,
+    gain: explainGainReading(device.gain),
+    vbeVolts: device.vbe.volts,
+    vbeAssumed: device.vbe.assumed,
+    vceVolts: device.vceVolts,
+    dissipationWatts: device.thermal.powerWatts,
+    junctionC: device.thermal.path === "none" ? null : device.thermal.tjC,
+    checks: [
+      explainVoltage(device.voltageInput, device.voltage),
+      explainCurrent(device.currentInput, device.current),
+      explainThermal(device.thermalInput, device.thermal),
+    ],
+  };
+}
+
+/** The explanations of a screened pair: every check's formula, inputs and summary, and the pair's figures. */
+export function explainCompound<P extends PartSpec>(screen: CompoundScreen<P>): CompoundEvaluation<P> {
+  const { topology, sheet, operating, withoutBleed, pairVbeVolts, bleedOhms, pairSat } = screen;
+  const switching = sheet.mode === "switching";
+  const driver = screen.devices.driver.part;
+  const output = screen.devices.output.part;
+  const gains: GainAtCurrent[] = screen.gains.map((g) => ({ icAmps: g.icAmps, estimate: explainPairGain(g) }));
+  const pairChecks: CheckResult[] = [
+    { ...explainGain({ requiredHfe: sheet.requiredHfe ?? (switching ? sheet.forcedGain : null), gains }, screen.gain), subject: "pair" },
+  ];
+  if (screen.drive !== null) pairChecks.push(explainDrive(screen.drive.input, screen.drive.judged));
+  if (screen.saturation !== null) pairChecks.push(explainSaturation(screen.saturation.input, screen.saturation.judged));
+  if (screen.voltageGainUnmodelled) {
     pairChecks.push({
       check: "voltage-gain",
       subject: "pair",
@@ -437,54 +630,16 @@ export function evaluateCompound<P extends PartSpec>(
       margin: null,
       flags: [],
       formula: "not modelled for compound pairs",
-      inputs: [{ symbol: "Av(req)", label: "voltage gain the circuit needs", value: sheet.requiredVoltageGain, unit: "" }],
+      inputs: [{ symbol: "Av(req)", label: "voltage gain the circuit needs", value: sheet.requiredVoltageGain ?? 0, unit: "" }],
       summary: "The voltage gain of a compound pair is not modelled here; confirm it on the circuit.",
     });
   }
-  if (sheet.bandwidthHz != null && gainNeeded != null) {
-    // The pair is no faster than its slower device.
-    const ftHz = driver.ftHz === null || output.ftHz === null ? null : Math.min(driver.ftHz, output.ftHz);
-    pairChecks.push(checkBandwidth({ subject: "pair", ftHz, bandwidthHz: sheet.bandwidthHz, gainNeeded }));
-  }
-
-  const satVolts = driverSat?.volts ?? sheet.allowedSatDropVolts ?? DEFAULT_VCE_SAT_VOLTS;
-  const driverVce = switching ? satVolts : Math.max(0, operatingVceOf(sheet) - outputVbe.volts);
-  const outputVce = switching ? compoundVceSat(satVolts, outputVbe.volts) : operatingVceOf(sheet);
-  const deviceOf = (role: PairRole, part: P, gain: GainEstimate, vbe: { volts: number; assumed: boolean }, ownIc: number, ownPeakIc: number, vceVolts: number): DeviceInPair<P> => {
-    const thermal = thermalFor(part, role, sheet, vceVolts, ownIc);
-    const checks: CheckResult[] = [
-      checkVoltage({
-        subject: role,
-        // When the pair is off VBE2 collapses, so the driver too stands the full VCE.
-        peakVceVolts,
-        vceoVolts: part.vceoVolts,
-        reverseVbeVolts: role === "driver" ? sheet.reverseVbeVolts : null,
-        veboVolts: part.veboVolts,
-        voltageFraction: sheet.derating.voltageFraction,
-      }),
-      checkCurrent({ subject: role, peakIcAmps: ownPeakIc, icMaxAmps: part.icMaxAmps, currentFraction: sheet.derating.currentFraction }),
-      thermal,
-    ];
-    return {
-      role,
-      part,
-      icAmps: ownIc,
-      peakIcAmps: ownPeakIc,
-      gain,
-      vbeVolts: vbe.volts,
-      vbeAssumed: vbe.assumed,
-      vceVolts,
-      dissipationWatts: inputValue(thermal, "P") ?? 0,
-      junctionC: inputValue(thermal, "Tj"),
-      checks,
-    };
-  };
-  const feasibleOr = (value: number, fallback: number) => (Number.isFinite(value) ? value : fallback);
-  const driverDevice = deviceOf("driver", driver, driverGain, driverVbe, feasibleOr(operating.driverIcAmps, 0), feasibleOr(peak.driverIcAmps, 0), driverVce);
-  const outputDevice = deviceOf("output", output, outputGain, outputVbe, feasibleOr(operating.outputIcAmps, icAmps), feasibleOr(peak.outputIcAmps, peakIcAmps), outputVce);
+  if (screen.bandwidth !== null) pairChecks.push(explainBandwidth(screen.bandwidth.input, screen.bandwidth.judged));
+  const driverDevice = explainDevice(screen.devices.driver);
+  const outputDevice = explainDevice(screen.devices.output);
 
   const checks = [...pairChecks, ...driverDevice.checks, ...outputDevice.checks];
-  const quality = [assessDataQuality(driver, options), assessDataQuality(output, options)];
+  const quality = screen.quality;
   const qualityFlags = [...new Set(quality.flatMap((q) => q.flags))];
   const staleFlags: FlagName[] = qualityFlags.includes("stale-datasheet") ? ["stale-datasheet"] : [];
   const vceoVolts = Math.min(driver.vceoVolts, output.vceoVolts);
@@ -512,7 +667,7 @@ export function evaluateCompound<P extends PartSpec>(
   return {
     topology,
     polarity: compoundPolarity(driver),
-    verdict: worstVerdict(checks.map((check) => check.verdict)),
+    verdict: screen.verdict,
     checks,
     flags: mergeFlags(...checks.map((check) => check.flags), staleFlags),
     devices: { driver: driverDevice, output: outputDevice },
@@ -530,4 +685,18 @@ export function evaluateCompound<P extends PartSpec>(
     excludedBy: findCompoundExclusions(driver, output, sheet),
     dataQuality: { score: Math.min(quality[0].score, quality[1].score), flags: qualityFlags },
   };
+}
+
+/**
+ * Evaluates a Darlington or Sziklai pair against the sheet: screenCompound's judgements with
+ * every check explained.
+ */
+export function evaluateCompound<P extends PartSpec>(
+  topology: CompoundTopology,
+  driver: P,
+  output: P,
+  sheet: RequirementSheet,
+  options: CompoundOptions = {},
+): CompoundEvaluation<P> {
+  return explainCompound(screenCompound(topology, driver, output, sheet, options));
 }

@@ -99,9 +99,10 @@ export function customDerating(fractions: {
 
 /** The junction temperature a policy allows, from the datasheet Tj max: the lowest of its limits. */
 export function deratedTjMaxC(policy: DeratingPolicy, tjMaxC: number): number {
-  const limits = [tjMaxC];
-  if (policy.tjFraction != null) limits.push(tjMaxC * policy.tjFraction);
-  if (policy.tjMarginC != null) limits.push(tjMaxC - policy.tjMarginC);
-  if (policy.tjMaxC != null) limits.push(policy.tjMaxC);
-  return Math.min(...limits);
+  // Plain comparisons rather than a list: this runs once per part in every ranking.
+  let limit = tjMaxC;
+  if (policy.tjFraction != null) limit = Math.min(limit, tjMaxC * policy.tjFraction);
+  if (policy.tjMarginC != null) limit = Math.min(limit, tjMaxC - policy.tjMarginC);
+  if (policy.tjMaxC != null) limit = Math.min(limit, policy.tjMaxC);
+  return limit;
 }

@@ -122,11 +122,16 @@ function clampUnit(value: number): number {
 
 /** Headroom on 0..1 from the tightest check, as the verdict follows the worst one; full at FULL_MARGIN. */
 export function scoreMargins(checks: readonly CheckResult[], fullMargin = FULL_MARGIN): number {
-  let least = 1;
+  let least: number | null = null;
   for (const check of checks) {
-    if (check.margin !== null) least = Math.min(least, shareOfMargin(check.margin, fullMargin));
+    if (check.margin !== null) least = least === null ? check.margin : Math.min(least, check.margin);
   }
-  return least;
+  return scoreLeastMargin(least, fullMargin);
+}
+
+/** The margin score from the tightest margin alone (the share is monotone, so the least margin gives the least share); 1 when no check gives one. */
+export function scoreLeastMargin(leastMargin: number | null, fullMargin = FULL_MARGIN): number {
+  return leastMargin === null ? 1 : Math.min(1, shareOfMargin(leastMargin, fullMargin));
 }
 
 /** One margin's share of the margin score: 0 at no headroom, 1 at fullMargin or more. */
@@ -152,7 +157,12 @@ export function scoreStock(stock: number | null, quantity: number): number {
  * quarter when the circuit runs the part far from its quoted gain points.
  */
 export function scoreDataQuality(recordScore: number, flags: readonly FlagName[]): number {
-  return clampUnit(recordScore - (flags.includes("gain-off-point") ? GAIN_OFF_POINT_PENALTY : 0));
+  return scoreRecordQuality(recordScore, flags.includes("gain-off-point"));
+}
+
+/** scoreDataQuality with the gain-off-point finding given as a yes or no. */
+export function scoreRecordQuality(recordScore: number, gainOffPoint: boolean): number {
+  return clampUnit(recordScore - (gainOffPoint ? GAIN_OFF_POINT_PENALTY : 0));
 }
 
 /** Rejects weights that cannot make a score: negative, not finite, or all zero. */

@@ -62,6 +62,8 @@ const UP = [
      -- [row, status, value, changes], part values in a positional form (a third of the size). json, not jsonb:
      -- it is only ever read whole, and json skips the conversion to and from the binary form (a 100k-row file is 20 MB).
      parsed_rows json NOT NULL DEFAULT '[]',
+     -- The catalogue version the preview compared against: unchanged at commit means the comparison still holds.
+     compared_at_version bigint NOT NULL DEFAULT 0,
      committed_by uuid REFERENCES users (id),
      committed_at timestamptz,
      discarded_by uuid REFERENCES users (id),

@@ -21,6 +21,7 @@ export class Intake extends Model<InferAttributes<Intake, { omit: "uploader" }>,
   declare problemCount: number;
   /** [row, status, value, changes] per accepted row, as parsed and compared at preview. */
   declare parsedRows: CreationOptional<unknown[]>;
+  declare comparedAtVersion: CreationOptional<string>;
   declare committedBy: CreationOptional<string | null>;
   declare committedAt: CreationOptional<Date | null>;
   declare discardedBy: CreationOptional<string | null>;
@@ -50,6 +51,7 @@ export class Intake extends Model<InferAttributes<Intake, { omit: "uploader" }>,
         warningCount: count,
         problemCount: count,
         parsedRows: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
+        comparedAtVersion: { type: DataTypes.BIGINT, allowNull: false, defaultValue: 0 },
         committedBy: { type: DataTypes.UUID, allowNull: true },
         committedAt: { type: DataTypes.DATE, allowNull: true },
         discardedBy: { type: DataTypes.UUID, allowNull: true },

@@ -2,6 +2,7 @@
 // committed through an intake), signed in, then autocannon with 50 loopback connections for 10 s on GET /api/parts.
 // Prints p99 and errors and writes tests/bench/results/catalogue-api-bench.json; asserts nothing.
 // Run: npx react-router build && npx tsx tests/bench/catalogue-api-bench.ts
+// BENCH_PROBE=1 also loads an auth-only API answer and /api/health, to show what the guard and framework cost alone.
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { cpus, tmpdir } from "node:os";
 import path from "node:path";

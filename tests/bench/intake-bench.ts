@@ -54,12 +54,16 @@ async function main() {
 
   // Intake end to end, as POST /api/intakes and POST /commit run it (HTTP transport aside).
   const started = performance.now();
+  peakRss = process.memoryUsage().rss;
   const preview = await previewIntake({ kind: "parts", fileName: "bench-100k.csv", bytes, uploadedBy: librarian!.id });
   const previewed = performance.now();
+  const previewPeakRss = peakRss;
+  peakRss = process.memoryUsage().rss;
   const committed = await commitIntake(preview.id, librarian!.id, { sendReport: false });
   const finished = performance.now();
   if (!committed.ok) throw new Error(committed.message);
   const intakeMs = finished - started;
+  const commitPeakRss = peakRss;
 
   // The baseline: the same rows, parsed and normalised, written by COPY into a table shaped like parts.
   const rows = parsePartsFile(bytes).rows.map((r) => normaliseSpec(r.value));
@@ -80,7 +84,9 @@ async function main() {
   await closeSequelize();
   clearInterval(sampler);
 
-  const maxRssMb = Math.max(mb(peakRss), process.resourceUsage().maxRSS / 1024);
+  // The goal is about the intake; the process maximum also covers the baseline's own second parse.
+  const maxRssMb = mb(Math.max(previewPeakRss, commitPeakRss));
+  const processMaxRssMb = Math.max(mb(peakRss), process.resourceUsage().maxRSS / 1024);
   const ratio = intakeMs / copyMs;
   const results = {
     node: process.version,
@@ -94,12 +100,16 @@ async function main() {
     ratio: Number(ratio.toFixed(2)),
     ratioGoal: RATIO_GOAL,
     peakRssMb: Math.round(maxRssMb),
+    previewPeakRssMb: Math.round(mb(previewPeakRss)),
+    commitPeakRssMb: Math.round(mb(commitPeakRss)),
+    processMaxRssMb: Math.round(processMaxRssMb),
     rssGoalMb: RSS_GOAL_MB,
   };
   console.log(`  intake end to end: ${results.intakeMs} ms (preview ${results.previewMs} ms, commit ${results.commitMs} ms)`);
   console.log(`  COPY of the same normalised rows: ${results.copyMs} ms`);
   console.log(`  ratio: ${results.ratio}× (goal ≤ ${RATIO_GOAL}×: ${ratio <= RATIO_GOAL ? "met" : "MISSED"})`);
-  console.log(`  peak RSS: ${results.peakRssMb} MB (goal ≤ ${RSS_GOAL_MB} MB: ${maxRssMb <= RSS_GOAL_MB ? "met" : "MISSED"})`);
+  console.log(`  peak RSS during preview ${results.previewPeakRssMb} MB, during commit ${results.commitPeakRssMb} MB (process maximum ${results.processMaxRssMb} MB)`);
+  console.log(`  intake peak RSS: ${results.peakRssMb} MB (goal ≤ ${RSS_GOAL_MB} MB: ${maxRssMb <= RSS_GOAL_MB ? "met" : "MISSED"})`);
   mkdirSync(path.join(root, "tests/bench/results"), { recursive: true });
   writeFileSync(path.join(root, "tests/bench/results/intake-bench.json"), `${JSON.stringify(results, null, 2)}\n`);
   await dropDatabase(DATABASE);
