@@ -31,6 +31,7 @@ export interface BleedInput {
   series?: ESeriesName;
 }
 
+/** The suggestion; the gain costs and the summary may be worked out when first read. */
 export interface BleedSuggestion {
   ohms: number;
   series: ESeriesName;
@@ -98,27 +99,68 @@ export function suggestBleedResistor(input: BleedInput): BleedSuggestion {
     ohms = nextSeriesValue(ohms, series);
     share = shareWith(input, ohms);
   }
-  const pairHfeWithout = worstPairHfe(input, input.operatingIcAmps, null);
-  const pairHfeWith = worstPairHfe(input, input.operatingIcAmps, ohms);
-  const gainCostAtMinIc = 1 - worstPairHfe(input, input.minIcAmps, ohms) / worstPairHfe(input, input.minIcAmps, null);
-  const gainCost = 1 - pairHfeWith / pairHfeWithout;
-  const bleedAmps = input.outputVbeVolts / ohms;
-  return {
-    ohms,
-    series,
-    exactOhms,
-    maxShare,
-    shareAtMinIc: share,
-    bleedAmps,
-    pairHfeWithout,
-    pairHfeWith,
-    gainCost,
-    gainCostAtMinIc,
-    formula: "R ≥ VBE2 (1 − s) / (s × IB2), rounded up onto the series; hFE cost = 1 − hFE(with R) / hFE(without)",
-    summary:
-      `A ${formatValue(ohms, "Ω")} ${series} bleed resistor takes ${(share * 100).toFixed(1)}% of the driver's current at the lowest IC ` +
-      `(limit ${(maxShare * 100).toFixed(0)}%) and costs ${(gainCost * 100).toFixed(1)}% of the pair's gain at the operating IC.`,
-  };
+  return new Suggestion(input, { ohms, series, exactOhms, maxShare, shareAtMinIc: share, bleedAmps: input.outputVbeVolts / ohms });
+}
+
+/** The chosen resistor at once; what it costs in gain, and the sentence, worked out when first read (the pair search reads them for the pairs it shows). */
+class Suggestion implements BleedSuggestion {
+  readonly ohms: number;
+  readonly series: ESeriesName;
+  readonly exactOhms: number;
+  readonly maxShare: number;
+  readonly shareAtMinIc: number;
+  readonly bleedAmps: number;
+  readonly formula = "R ≥ VBE2 (1 − s) / (s × IB2), rounded up onto the series; hFE cost = 1 − hFE(with R) / hFE(without)";
+  readonly #input: BleedInput;
+  #costs: { pairHfeWithout: number; pairHfeWith: number; gainCost: number; gainCostAtMinIc: number } | null = null;
+
+  constructor(input: BleedInput, chosen: Pick<BleedSuggestion, "ohms" | "series" | "exactOhms" | "maxShare" | "shareAtMinIc" | "bleedAmps">) {
+    this.ohms = chosen.ohms;
+    this.series = chosen.series;
+    this.exactOhms = chosen.exactOhms;
+    this.maxShare = chosen.maxShare;
+    this.shareAtMinIc = chosen.shareAtMinIc;
+    this.bleedAmps = chosen.bleedAmps;
+    this.#input = input;
+  }
+
+  #costsOf() {
+    if (this.#costs === null) {
+      const input = this.#input;
+      const pairHfeWithout = worstPairHfe(input, input.operatingIcAmps, null);
+      const pairHfeWith = worstPairHfe(input, input.operatingIcAmps, this.ohms);
+      this.#costs = {
+        pairHfeWithout,
+        pairHfeWith,
+        gainCost: 1 - pairHfeWith / pairHfeWithout,
+        gainCostAtMinIc: 1 - worstPairHfe(input, input.minIcAmps, this.ohms) / worstPairHfe(input, input.minIcAmps, null),
+      };
+    }
+    return this.#costs;
+  }
+
+  get pairHfeWithout(): number {
+    return this.#costsOf().pairHfeWithout;
+  }
+
+  get pairHfeWith(): number {
+    return this.#costsOf().pairHfeWith;
+  }
+
+  get gainCost(): number {
+    return this.#costsOf().gainCost;
+  }
+
+  get gainCostAtMinIc(): number {
+    return this.#costsOf().gainCostAtMinIc;
+  }
+
+  get summary(): string {
+    return (
+      `A ${formatValue(this.ohms, "Ω")} ${this.series} bleed resistor takes ${(this.shareAtMinIc * 100).toFixed(1)}% of the driver's current at the lowest IC ` +
+      `(limit ${(this.maxShare * 100).toFixed(0)}%) and costs ${(this.gainCost * 100).toFixed(1)}% of the pair's gain at the operating IC.`
+    );
+  }
 }
 
 /** The highest gain a part may show at IC: its max curve, else typ, else the worst case. */

@@ -1,31 +1,36 @@
 // The best k Darlington and Sziklai pairs in a catalogue, found without walking all N × N pairs.
 import { type BleedSuggestion, DEFAULT_BLEED_SHARE, suggestBleedForPair } from "./bleed-resistor";
-import { judgeAgainstRating } from "./checks/rating";
-import { checkThermal } from "./checks/thermal";
+import { FLAG_BITS } from "./check-result";
+import type { DataQuality } from "./data-quality";
+import { newRatingReading, readRating } from "./checks/rating";
+import { judgeThermal } from "./checks/thermal";
 import {
   canPair,
   compoundBeta,
   type CompoundEvaluation,
+  type CompoundScreen,
   type CompoundTopology,
   COMPOUND_TOPOLOGIES,
-  evaluateCompound,
-  findCompoundExclusions,
+  explainCompound,
   worstGainModel,
+  screenCompound,
+  findCompoundExclusions,
 } from "./compound";
-import { assessDataQuality } from "./data-quality";
-import { chooseVbe, findExclusions } from "./evaluate-part";
+import { decadesOutside, DEFAULT_GAIN_WINDOW_DECADES, DEFAULT_TYP_TO_MIN_FACTOR, type PreparedGain, type PreparedSaturation, prepareGain } from "./gain-curve";
+import { chooseVbe, isOutsidePackages, planSheet, qualityOf, type SheetPlan } from "./evaluate-part";
 import type { PartSpec, Polarity } from "./part";
-import { compareText, type CatalogueEntry, type RankingOptions, readSupply, type SupplyFacts } from "./rank";
+import { compareText, type CatalogueEntry, type PreparedCatalogue, prepareCatalogue, type RankingOptions, supplyOf, type SupplyFacts } from "./rank";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
 import {
   combineScore,
+  combineScoreParts,
   DEFAULT_SCORE_WEIGHTS,
   FULL_MARGIN,
   type OrderPrice,
   type ScoreComponents,
   scoreCost,
-  scoreDataQuality,
-  scoreMargins,
+  scoreLeastMargin,
+  scoreRecordQuality,
   type ScoreWeights,
   shareOfMargin,
   validateWeights,
@@ -53,7 +58,8 @@ export interface RankedCompound<P extends PartSpec = PartSpec> {
   components: ScoreComponents;
   price: { driver: OrderPrice | null; output: OrderPrice | null; effectiveUnitPrice: number | null };
   bleed: BleedSuggestion | null;
-  evaluation: CompoundEvaluation<P>;
+  /** The full explanation; the search builds it on first read, so only the pairs a page shows pay for it. */
+  readonly evaluation: CompoundEvaluation<P>;
 }
 
 export interface CompoundSearchResult<P extends PartSpec = PartSpec> {
@@ -91,6 +97,7 @@ interface PartFacts<P extends PartSpec> {
   part: P;
   supply: SupplyFacts;
   unitPrice: number | null;
+  quality: DataQuality;
   dataQuality: number;
   /** The voltage check's margin share, exact: both roles stand the full peak VCE. */
   voltageShare: number;
@@ -125,17 +132,28 @@ type BaseSettings = Omit<Settings, "referencePrice">;
 /** Rounding slack so that a bound computed in another order still stays above the score it bounds. */
 const BOUND_SLACK = 1e-9;
 
-function gainRange(part: PartSpec, options: CompoundSearchOptions): { maxGain: number; minGain: number } {
-  // The same model the pair evaluation iterates on; log-log between points and flat beyond has its extremes on the points.
-  const model = worstGainModel(part, options.evaluate);
+/** Relative slack on the gain range so that it still bounds the model's exp(log(·)) round trip. */
+const GAIN_RANGE_SLACK = 1e-12;
+
+/**
+ * The highest and lowest worst-case hFE anywhere on a part's curve. Log-log between points and flat
+ * beyond has its extremes on the quoted points, so they are read off the prepared curve and scaled
+ * as worstCaseGain scales them, widened by a hair to cover the gain model's rounding.
+ */
+function gainRange(gain: PreparedGain, factor: number, out: { maxGain: number; minGain: number }): void {
+  const curve = gain.worstCurve;
+  out.maxGain = 0;
+  out.minGain = 0;
+  if (curve === null) return;
+  const scale = gain.worstCorner === "min" ? 1 : gain.worstCorner === "typ" ? factor : factor * factor;
   let maxGain = 0;
   let minGain = Number.POSITIVE_INFINITY;
-  for (const point of part.gainPoints) {
-    const hfe = model(point.icAmps);
-    maxGain = Math.max(maxGain, hfe);
-    minGain = Math.min(minGain, hfe);
+  for (const value of curve.values) {
+    maxGain = Math.max(maxGain, value * scale);
+    minGain = Math.min(minGain, value * scale);
   }
-  return { maxGain, minGain: Number.isFinite(minGain) ? minGain : 0 };
+  out.maxGain = maxGain * (1 + GAIN_RANGE_SLACK);
+  out.minGain = minGain * (1 - GAIN_RANGE_SLACK);
 }
 
 /**
@@ -149,49 +167,75 @@ function leastOutputCurrent(icAmps: number, minGain: number, settings: BaseSetti
 }
 
 /** The lowest VCE(sat) vceSatAt can return: held flat below, log-log between and rising above the quoted points. */
-function leastSaturationVolts(part: PartSpec): number | null {
-  for (const source of ["max", "typ"] as const) {
-    let least: number | null = null;
-    for (const point of part.saturationPoints) {
-      const volts = source === "max" ? point.vceSatMaxVolts : point.vceSatTypVolts;
-      if (volts != null && volts > 0 && point.icAmps > 0) least = least === null ? volts : Math.min(least, volts);
-    }
-    if (least !== null) return least;
-  }
-  return null;
+function leastSaturationVolts(saturation: PreparedSaturation | null): number | null {
+  if (saturation === null) return null;
+  let least = Number.POSITIVE_INFINITY;
+  for (const volts of saturation.curve.values) least = Math.min(least, volts);
+  return least;
 }
 
-/** Whether the pair's VCE(sat) = VCE(sat)1 + VBE2 must exceed the allowed drop (a hair of slack for rounding). */
-function saturationMustFail(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, allowedVolts: number | null): boolean {
-  if (allowedVolts === null || driver.leastSatVolts === null) return false;
-  return driver.leastSatVolts + output.outputVbeVolts > allowedVolts * (1 + 1e-9);
+const factBuffers = new WeakMap<PreparedCatalogue, PartFacts<PartSpec>[]>();
+
+function blankFacts<P extends PartSpec>(index: number, part: P): PartFacts<P> {
+  return {
+    index,
+    part,
+    supply: { price: null, stockScore: 0, lifecycleScore: 0 },
+    unitPrice: null,
+    quality: { flags: [], score: 0 },
+    dataQuality: 0,
+    voltageShare: 0,
+    usable: false,
+    maxGain: 0,
+    minGain: 0,
+    outputCurrentShare: 0,
+    outputFails: true,
+    outputVbeVolts: 0,
+    leastSatVolts: null,
+  };
 }
 
 function collectFacts<P extends PartSpec>(entries: readonly CatalogueEntry<P>[], settings: BaseSettings): PartFacts<P>[] {
   const { sheet, options, fullMargin } = settings;
-  const anyPolarity: RequirementSheet = { ...sheet, polarity: "any" };
+  const plan: SheetPlan = planSheet(sheet, options.evaluate);
+  const catalogue = prepareCatalogue(entries, options.catalogueVersion);
+  const prepared = catalogue.parts;
   const peakVce = peakVceOf(sheet);
-  return entries.map((entry, index) => {
+  const peakIc = peakIcOf(sheet);
+  const currency = options.currency ?? null;
+  const voltage = newRatingReading();
+  const current = newRatingReading();
+  const factor = options.evaluate?.typToMinFactor ?? DEFAULT_TYP_TO_MIN_FACTOR;
+  // The fact objects are kept with the prepared catalogue and overwritten by each search, so the search allocates no 10 000 fresh ones.
+  let facts = factBuffers.get(catalogue) as PartFacts<P>[] | undefined;
+  if (facts === undefined) {
+    facts = prepared.map((entry, index) => blankFacts(index, entry.part));
+    factBuffers.set(catalogue, facts as unknown as PartFacts<PartSpec>[]);
+  }
+  const range = { maxGain: 0, minGain: 0 };
+  for (let index = 0; index < prepared.length; index += 1) {
+    const entry = prepared[index];
     const part = entry.part;
-    const supply = readSupply(entry.offers, part.lifecycle, sheet.orderQuantity, options.currency ?? null);
-    const voltage = judgeAgainstRating(peakVce, part.vceoVolts, sheet.derating.voltageFraction);
-    const gains = gainRange(part, options);
-    const current = judgeAgainstRating(leastOutputCurrent(peakIcOf(sheet), gains.minGain, settings), part.icMaxAmps, sheet.derating.currentFraction);
-    return {
-      index,
-      part,
-      supply,
-      unitPrice: supply.price?.effectiveUnitPrice ?? null,
-      dataQuality: assessDataQuality(part, options.evaluate).score,
-      voltageShare: shareOfMargin(voltage.margin, fullMargin),
-      usable: findExclusions(part, anyPolarity).length === 0 && voltage.verdict !== "fails" && gains.maxGain > 0,
-      ...gains,
-      outputCurrentShare: shareOfMargin(current.margin, fullMargin),
-      outputFails: current.verdict === "fails",
-      outputVbeVolts: chooseVbe(part, sheet.operatingIcAmps, "linear").volts,
-      leastSatVolts: leastSaturationVolts(part),
-    };
-  });
+    const supply = supplyOf(entry, sheet.orderQuantity, currency);
+    const quality = qualityOf(entry, plan);
+    readRating(peakVce, part.vceoVolts, sheet.derating.voltageFraction, voltage);
+    gainRange(entry.gain, factor, range);
+    readRating(leastOutputCurrent(peakIc, range.minGain, settings), part.icMaxAmps, sheet.derating.currentFraction, current);
+    const fact = facts[index];
+    fact.supply = supply;
+    fact.unitPrice = supply.price?.effectiveUnitPrice ?? null;
+    fact.quality = quality;
+    fact.dataQuality = quality.score;
+    fact.voltageShare = shareOfMargin(voltage.margin, fullMargin);
+    fact.usable = !isOutsidePackages(entry, plan) && voltage.verdict !== "fails" && range.maxGain > 0;
+    fact.maxGain = range.maxGain;
+    fact.minGain = range.minGain;
+    fact.outputCurrentShare = shareOfMargin(current.margin, fullMargin);
+    fact.outputFails = current.verdict === "fails";
+    fact.outputVbeVolts = chooseVbe(part, sheet.operatingIcAmps, "linear").volts;
+    fact.leastSatVolts = leastSaturationVolts(entry.saturation);
+  }
+  return facts;
 }
 
 interface ThermalBound {
@@ -208,7 +252,7 @@ function boundOutputThermal(facts: PartFacts<PartSpec>, settings: BaseSettings):
   const { sheet } = settings;
   const part = facts.part;
   const switching = sheet.mode === "switching";
-  const thermal = checkThermal({
+  const thermal = judgeThermal({
     mode: sheet.mode,
     vceVolts: switching ? chooseVbe(part, sheet.operatingIcAmps, "linear").volts : operatingVceOf(sheet),
     icAmps: leastOutputCurrent(sheet.operatingIcAmps, facts.minGain, settings),
@@ -223,6 +267,35 @@ function boundOutputThermal(facts: PartFacts<PartSpec>, settings: BaseSettings):
     derating: sheet.derating,
   });
   return { share: thermal.margin === null ? null : shareOfMargin(thermal.margin, settings.fullMargin), fails: thermal.verdict === "fails" };
+}
+
+/**
+ * At each of the circuit's currents the output carries between the least current it can carry and
+ * the pair's own. The lowest maximum of its gain over those spans caps the β the gain check sees
+ * (log-log between points and flat beyond, the model's maximum over a span lies at its ends or a
+ * point inside); a span lying wholly beyond the gain window means gain-off-point for every pair.
+ */
+function reachOutput(output: PartFacts<PartSpec>, settings: BaseSettings): OutputReach {
+  const { sheet } = settings;
+  const evaluate = settings.options.evaluate;
+  const model = worstGainModel(output.part, evaluate);
+  const curve = prepareGain(output.part.gainPoints).worstCurve;
+  const windowDecades = evaluate?.windowDecades ?? DEFAULT_GAIN_WINDOW_DECADES;
+  let cap = Number.POSITIVE_INFINITY;
+  let offPoint = false;
+  for (const icAmps of [minIcOf(sheet), sheet.operatingIcAmps, peakIcOf(sheet)]) {
+    const low = leastOutputCurrent(icAmps, output.minGain, settings);
+    let most = Math.max(model(Math.max(low, Number.MIN_VALUE)), model(icAmps));
+    for (const point of output.part.gainPoints) if (point.icAmps > low && point.icAmps < icAmps) most = Math.max(most, model(point.icAmps));
+    cap = Math.min(cap, most);
+    if (curve !== null && low > 0) {
+      // Both ends beyond the window on the same side: every current between them is too.
+      const below = icAmps < curve.icAmps[0] && decadesOutside(curve.icAmps, icAmps) > windowDecades;
+      const above = low > curve.icAmps[curve.icAmps.length - 1] && decadesOutside(curve.icAmps, low) > windowDecades;
+      if (below || above) offPoint = true;
+    }
+  }
+  return { gainCap: Math.min(output.maxGain, cap * (1 + GAIN_RANGE_SLACK)), offPoint };
 }
 
 function requiredPairHfe(sheet: RequirementSheet): number | null {
@@ -240,20 +313,58 @@ function reaches(topology: CompoundTopology, requiredHfe: number | null, driverG
 }
 
 /** The least current the driver carries at the peak: α IC / (β2 + α), α = β1 / (β1 + 1) at its lowest β1. */
-function leastDriverCurrent(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, peakIcAmps: number): number {
-  const alpha = driver.minGain / (driver.minGain + 1);
-  return (alpha * peakIcAmps) / (output.maxGain + alpha);
+function leastDriverCurrent(driverMinGain: number, outputMaxGain: number, peakIcAmps: number): number {
+  const alpha = driverMinGain / (driverMinGain + 1);
+  return (alpha * peakIcAmps) / (outputMaxGain + alpha);
+}
+
+/** The best a pass's partners can offer a part in the other role: the highest gain, the lowest VBE2, the lowest VCE(sat)1. */
+interface PartnerExtremes {
+  /** For drivers: the highest output gain and the lowest output VBE. */
+  bestOutputGain: number;
+  leastOutputVbe: number;
+  /** For outputs: the highest driver gain, and the lowest driver VCE(sat) (null when some driver quotes none, so VCE(sat) bounds nothing). */
+  bestDriverGain: number;
+  leastDriverSat: number | null;
 }
 
 interface Pass<P extends PartSpec> {
   topology: CompoundTopology;
   drivers: PartFacts<P>[];
   outputs: PartFacts<P>[];
+  partners: PartnerExtremes;
 }
 
-/** Drivers and outputs per topology and pair polarity, after every prune that needs no partner. */
+function extremesOf(drivers: readonly PartFacts<PartSpec>[], outputs: readonly PartFacts<PartSpec>[]): PartnerExtremes {
+  let bestOutputGain = 0;
+  let leastOutputVbe = Number.POSITIVE_INFINITY;
+  for (const f of outputs) {
+    bestOutputGain = Math.max(bestOutputGain, f.maxGain);
+    leastOutputVbe = Math.min(leastOutputVbe, f.outputVbeVolts);
+  }
+  let bestDriverGain = 0;
+  let leastDriverSat: number | null = Number.POSITIVE_INFINITY;
+  for (const f of drivers) {
+    bestDriverGain = Math.max(bestDriverGain, f.maxGain);
+    leastDriverSat = leastDriverSat === null || f.leastSatVolts === null ? null : Math.min(leastDriverSat, f.leastSatVolts);
+  }
+  return { bestOutputGain, leastOutputVbe, bestDriverGain, leastDriverSat };
+}
+
+/** Whether VCE(sat) = VCE(sat)1 + VBE2 must exceed the allowed drop (a hair of slack for rounding); false when either is unknown. */
+function saturationExceeds(driverSatVolts: number | null, outputVbeVolts: number, sheet: RequirementSheet): boolean {
+  const allowed = sheet.allowedSatDropVolts;
+  if (sheet.mode !== "switching" || allowed === null || driverSatVolts === null) return false;
+  return driverSatVolts + outputVbeVolts > allowed * (1 + 1e-9);
+}
+
+/**
+ * Drivers and outputs per topology and pair polarity, after every prune that needs no particular
+ * partner: each part is tested against the best its pass's partners can offer.
+ */
 function buildPasses<P extends PartSpec>(facts: PartFacts<P>[], settings: BaseSettings, topologies: readonly CompoundTopology[]): Pass<P>[] {
   const { sheet, requiredHfe } = settings;
+  const peakIc = peakIcOf(sheet);
   const polarities: Polarity[] = sheet.polarity === "any" ? ["npn", "pnp"] : [sheet.polarity];
   const passes: Pass<P>[] = [];
   for (const topology of topologies) {
@@ -261,12 +372,19 @@ function buildPasses<P extends PartSpec>(facts: PartFacts<P>[], settings: BaseSe
       const drivers = facts.filter((f) => f.usable && f.part.polarity === polarity);
       const outputs = facts.filter((f) => f.usable && !f.outputFails && f.part.polarity === outputPolarity(topology, polarity));
       if (drivers.length === 0 || outputs.length === 0) continue;
-      const bestDriverGain = Math.max(...drivers.map((f) => f.maxGain));
-      const bestOutputGain = Math.max(...outputs.map((f) => f.maxGain));
+      const partners = extremesOf(drivers, outputs);
       passes.push({
         topology,
-        drivers: drivers.filter((f) => reaches(topology, requiredHfe, f.maxGain, bestOutputGain)),
-        outputs: outputs.filter((f) => reaches(topology, requiredHfe, bestDriverGain, f.maxGain)),
+        drivers: drivers.filter(
+          (f) =>
+            reaches(topology, requiredHfe, f.maxGain, partners.bestOutputGain) &&
+            leastDriverCurrent(f.minGain, partners.bestOutputGain, peakIc) <= f.part.icMaxAmps &&
+            !saturationExceeds(f.leastSatVolts, partners.leastOutputVbe, sheet),
+        ),
+        outputs: outputs.filter(
+          (f) => reaches(topology, requiredHfe, partners.bestDriverGain, f.maxGain) && !saturationExceeds(partners.leastDriverSat, f.outputVbeVolts, sheet),
+        ),
+        partners,
       });
     }
   }
@@ -279,80 +397,160 @@ function cheapestPrice(list: readonly PartFacts<PartSpec>[]): number | null {
   return low;
 }
 
-/** Margin-share bounds a pair cannot beat: the tightest check governs the margin score. */
-function pairMarginBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, thermal: ThermalBound, topology: CompoundTopology, settings: Settings): number {
+/**
+ * The margin shares that depend on both devices, bounded from the driver's and the output's numbers:
+ * the driver's current (skipped when driverIcMaxAmps is null), VCE(sat)1 + VBE2, and the pair's β.
+ * Each share rises with the output's gain and falls with its VBE, so the best partner gives a bound for a part alone.
+ * outputBetaGain, when given, is a tighter cap on the output's gain at the circuit's currents, for the β term.
+ */
+function crossShareBound(
+  driverIcMaxAmps: number | null,
+  driverMinGain: number,
+  driverMaxGain: number,
+  driverSatVolts: number | null,
+  outputMaxGain: number,
+  outputVbeVolts: number,
+  topology: CompoundTopology,
+  settings: Settings,
+  outputBetaGain = outputMaxGain,
+): number {
   const { sheet, requiredHfe, fullMargin } = settings;
-  let least = Math.min(driver.voltageShare, output.voltageShare, output.outputCurrentShare);
-  if (thermal.share !== null) least = Math.min(least, thermal.share);
-  // The same arithmetic as judgeAgainstRating, without building its result in the innermost loop.
-  const deratedLimit = driver.part.icMaxAmps * sheet.derating.currentFraction;
-  least = Math.min(least, shareOfMargin((deratedLimit - leastDriverCurrent(driver, output, peakIcOf(sheet))) / deratedLimit, fullMargin));
+  let least = 1;
+  if (driverIcMaxAmps !== null) {
+    // The same arithmetic as judgeAgainstRating, without building its result in the innermost loop.
+    const deratedLimit = driverIcMaxAmps * sheet.derating.currentFraction;
+    least = Math.min(least, shareOfMargin((deratedLimit - leastDriverCurrent(driverMinGain, outputMaxGain, peakIcOf(sheet))) / deratedLimit, fullMargin));
+  }
   // VCE(sat) = VCE(sat)1 + VBE2, and VCE(sat)1 is no lower than the least the driver's curve gives.
   const allowed = sheet.allowedSatDropVolts;
-  if (sheet.mode === "switching" && allowed !== null && driver.leastSatVolts !== null) {
-    least = Math.min(least, shareOfMargin((allowed - (driver.leastSatVolts + output.outputVbeVolts)) / allowed, fullMargin));
+  if (sheet.mode === "switching" && allowed !== null && driverSatVolts !== null) {
+    least = Math.min(least, shareOfMargin((allowed - (driverSatVolts + outputVbeVolts)) / allowed, fullMargin));
   }
   if (requiredHfe !== null) {
-    const beta = compoundBeta(topology, driver.maxGain, output.maxGain);
+    const beta = compoundBeta(topology, driverMaxGain, outputBetaGain);
     least = Math.min(least, shareOfMargin((beta - requiredHfe) / beta, fullMargin));
   }
   return least;
 }
 
+/** Margin-share bounds a pair cannot beat: the tightest check governs the margin score. */
+function pairMarginBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, thermal: ThermalBound, topology: CompoundTopology, settings: Settings, outputGainCap: number): number {
+  let least = Math.min(driver.voltageShare, output.voltageShare, output.outputCurrentShare);
+  if (thermal.share !== null) least = Math.min(least, thermal.share);
+  return Math.min(
+    least,
+    crossShareBound(driver.part.icMaxAmps, driver.minGain, driver.maxGain, driver.leastSatVolts, output.maxGain, output.outputVbeVolts, topology, settings, outputGainCap),
+  );
+}
+
 function scoreBound(margin: number, price: number | null, stock: number, lifecycle: number, dataQuality: number, settings: Settings): number {
-  return combineScore({ margin, cost: scoreCost(price, settings.referencePrice), stock, lifecycle, dataQuality }, settings.weights) + BOUND_SLACK;
+  return combineScoreParts(margin, scoreCost(price, settings.referencePrice), stock, lifecycle, dataQuality, settings.weights) + BOUND_SLACK;
 }
 
 function sumPrices(a: number | null, b: number | null): number | null {
   return a === null || b === null ? null : a + b;
 }
 
-/** A part's bound in one role: the best any partner could make of it (the cheapest partner, perfect otherwise). */
-function soloBound(facts: PartFacts<PartSpec>, role: "driver" | "output", cheapestPartner: number | null, settings: Settings, thermal?: ThermalBound): number {
-  let margin = role === "output" ? Math.min(facts.voltageShare, facts.outputCurrentShare) : facts.voltageShare;
+/** A part's bound in one role: the best any partner of its pass could make of it (the cheapest, the highest gain, the lowest drops). */
+function soloBound(
+  facts: PartFacts<PartSpec>,
+  role: "driver" | "output",
+  cheapestPartner: number | null,
+  pass: Pass<PartSpec>,
+  settings: Settings,
+  thermal?: ThermalBound,
+): number {
+  const { partners, topology } = pass;
+  let margin =
+    role === "output"
+      ? Math.min(
+          facts.voltageShare,
+          facts.outputCurrentShare,
+          crossShareBound(null, 0, partners.bestDriverGain, partners.leastDriverSat, facts.maxGain, facts.outputVbeVolts, topology, settings),
+        )
+      : Math.min(
+          facts.voltageShare,
+          crossShareBound(facts.part.icMaxAmps, facts.minGain, facts.maxGain, facts.leastSatVolts, partners.bestOutputGain, partners.leastOutputVbe, topology, settings),
+        );
   if (thermal?.share != null) margin = Math.min(margin, thermal.share);
   return scoreBound(margin, sumPrices(facts.unitPrice, cheapestPartner), facts.supply.stockScore, facts.supply.lifecycleScore, facts.dataQuality, settings);
 }
 
-function pairBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, thermal: ThermalBound, topology: CompoundTopology, settings: Settings): number {
+/** What the search learns about an output once it reaches it: a cap on its gain and whether its gain is surely quoted far off. */
+interface OutputReach {
+  gainCap: number;
+  /** Its current lies beyond the gain window at one of the circuit's currents whatever the driver, so the pair carries gain-off-point. */
+  offPoint: boolean;
+}
+
+function pairBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, thermal: ThermalBound, topology: CompoundTopology, settings: Settings, reach: OutputReach): number {
   return scoreBound(
-    pairMarginBound(driver, output, thermal, topology, settings),
+    pairMarginBound(driver, output, thermal, topology, settings, reach.gainCap),
     sumPrices(driver.unitPrice, output.unitPrice),
     Math.min(driver.supply.stockScore, output.supply.stockScore),
     Math.min(driver.supply.lifecycleScore, output.supply.lifecycleScore),
-    Math.min(driver.dataQuality, output.dataQuality),
+    scoreRecordQuality(Math.min(driver.dataQuality, output.dataQuality), reach.offPoint),
     settings,
   );
 }
 
-/** Evaluates one pair with its bleed resistor and scores it; null when it fails. */
+class RankedPair<P extends PartSpec> implements RankedCompound<P> {
+  readonly topology: CompoundTopology;
+  readonly driver: P;
+  readonly output: P;
+  readonly verdict: "fits" | "marginal";
+  readonly score: number;
+  readonly components: ScoreComponents;
+  readonly price: RankedCompound<P>["price"];
+  readonly bleed: BleedSuggestion | null;
+  readonly #screen: CompoundScreen<P>;
+  #evaluation: CompoundEvaluation<P> | null = null;
+
+  constructor(screen: CompoundScreen<P>, fields: Omit<RankedCompound<P>, "evaluation">) {
+    this.topology = fields.topology;
+    this.driver = fields.driver;
+    this.output = fields.output;
+    this.verdict = fields.verdict;
+    this.score = fields.score;
+    this.components = fields.components;
+    this.price = fields.price;
+    this.bleed = fields.bleed;
+    this.#screen = screen;
+  }
+
+  get evaluation(): CompoundEvaluation<P> {
+    this.#evaluation ??= explainCompound(this.#screen);
+    return this.#evaluation;
+  }
+}
+
+/** Screens one pair with its bleed resistor and scores it; null when it fails. The explanation waits until it is read. */
 function scorePair<P extends PartSpec>(topology: CompoundTopology, driver: PartFacts<P>, output: PartFacts<P>, settings: Settings): RankedCompound<P> | null {
   const { sheet, options } = settings;
   const bleed =
     settings.bleed === "suggested"
       ? suggestBleedForPair(topology, driver.part, output.part, sheet, { ...options.evaluate, maxShare: settings.maxBleedShare })
       : null;
-  const evaluation = evaluateCompound(topology, driver.part, output.part, sheet, { ...options.evaluate, bleedOhms: bleed?.ohms ?? null });
-  if (evaluation.verdict === "fails") return null;
+  const screen = screenCompound(topology, driver.part, output.part, sheet, { ...options.evaluate, bleedOhms: bleed?.ohms ?? null }, [driver.quality, output.quality]);
+  if (screen.verdict === "fails") return null;
   const price = sumPrices(driver.unitPrice, output.unitPrice);
   const components: ScoreComponents = {
-    margin: scoreMargins(evaluation.checks, settings.fullMargin),
+    margin: scoreLeastMargin(screen.margin, settings.fullMargin),
     cost: scoreCost(price, settings.referencePrice),
     stock: Math.min(driver.supply.stockScore, output.supply.stockScore),
     lifecycle: Math.min(driver.supply.lifecycleScore, output.supply.lifecycleScore),
-    dataQuality: scoreDataQuality(evaluation.dataQuality.score, evaluation.flags),
+    dataQuality: scoreRecordQuality(screen.dataQualityScore, (screen.flags & FLAG_BITS["gain-off-point"]) !== 0),
   };
-  return {
+  return new RankedPair(screen, {
     topology,
     driver: driver.part,
     output: output.part,
-    verdict: evaluation.verdict,
+    verdict: screen.verdict,
     score: combineScore(components, settings.weights),
     components,
     price: { driver: driver.supply.price, output: output.supply.price, effectiveUnitPrice: price },
     bleed,
-    evaluation,
-  };
+  });
 }
 
 /** Facts, passes and the price that scores 1: the cheapest driver plus the cheapest output of any pass. */
@@ -427,13 +625,72 @@ export function rankCompoundsExhaustively<P extends PartSpec>(
   return resultOf(options, settings, k, found.slice(0, k), facts.length * facts.length * topologies.length, counts);
 }
 
-interface Bounded<T> {
-  item: T;
-  bound: number;
+/** Drivers in falling order of their bounds (ties by catalogue position), with the bounds beside them. */
+interface RankedDrivers<P extends PartSpec> {
+  items: PartFacts<P>[];
+  bounds: Float64Array;
 }
 
-function byBound<T extends { index: number }>(list: Bounded<T>[]): Bounded<T>[] {
-  return list.sort((a, b) => b.bound - a.bound || a.item.index - b.item.index);
+function rankDrivers<P extends PartSpec>(drivers: PartFacts<P>[], boundOf: (facts: PartFacts<P>) => number): RankedDrivers<P> {
+  const bounds = new Float64Array(drivers.length);
+  for (let i = 0; i < drivers.length; i += 1) bounds[i] = boundOf(drivers[i]);
+  const order = Array.from(drivers.keys()).sort((a, b) => bounds[b] - bounds[a] || drivers[a].index - drivers[b].index);
+  const sortedBounds = new Float64Array(drivers.length);
+  for (let i = 0; i < order.length; i += 1) sortedBounds[i] = bounds[order[i]];
+  return { items: order.map((i) => drivers[i]), bounds: sortedBounds };
+}
+
+/** One output in one pass, with the drivers it may pair with in falling order of their bounds. */
+interface Slot<P extends PartSpec> {
+  topology: CompoundTopology;
+  pass: Pass<P>;
+  output: PartFacts<P>;
+  bound: number;
+  drivers: RankedDrivers<P>;
+  cheapestDriver: number | null;
+}
+
+function compareSlots(a: Slot<PartSpec>, b: Slot<PartSpec>): number {
+  return b.bound - a.bound || a.output.index - b.output.index || compareText(a.topology, b.topology);
+}
+
+/** A binary heap with the best item on top: yields items best first without sorting them all. */
+class BestFirst<T> {
+  readonly #items: T[];
+  readonly #before: (a: T, b: T) => boolean;
+
+  constructor(items: T[], before: (a: T, b: T) => boolean) {
+    this.#items = items;
+    this.#before = before;
+    for (let i = (items.length >> 1) - 1; i >= 0; i -= 1) this.#siftDown(i);
+  }
+
+  pop(): T | undefined {
+    const items = this.#items;
+    const top = items[0];
+    const last = items.pop();
+    if (items.length > 0 && last !== undefined) {
+      items[0] = last;
+      this.#siftDown(0);
+    }
+    return top;
+  }
+
+  #siftDown(start: number): void {
+    const items = this.#items;
+    let i = start;
+    for (;;) {
+      const left = 2 * i + 1;
+      let best = i;
+      if (left < items.length && this.#before(items[left], items[best])) best = left;
+      if (left + 1 < items.length && this.#before(items[left + 1], items[best])) best = left + 1;
+      if (best === i) return;
+      const held = items[i];
+      items[i] = items[best];
+      items[best] = held;
+      i = best;
+    }
+  }
 }
 
 /**
@@ -452,32 +709,35 @@ export function searchCompounds<P extends PartSpec>(
   const heap = new TopK<RankedCompound<P>>(k, compareRankedCompounds);
   const peakIc = peakIcOf(sheet);
   const counts = { considered: 0, evaluated: 0, failed: 0 };
-  const slots: { topology: CompoundTopology; output: Bounded<PartFacts<P>>; drivers: Bounded<PartFacts<P>>[]; cheapestDriver: number | null }[] = [];
+  const slots: Slot<P>[] = [];
   for (const pass of passes) {
     const cheapestDriver = cheapestPrice(pass.drivers);
     const cheapestOutput = cheapestPrice(pass.outputs);
-    const drivers = byBound(pass.drivers.map((item) => ({ item, bound: soloBound(item, "driver", cheapestOutput, settings) })));
-    for (const item of pass.outputs) {
-      slots.push({ topology: pass.topology, output: { item, bound: soloBound(item, "output", cheapestDriver, settings) }, drivers, cheapestDriver });
+    const drivers = rankDrivers(pass.drivers, (item) => soloBound(item, "driver", cheapestOutput, pass, settings));
+    for (const output of pass.outputs) {
+      slots.push({ topology: pass.topology, pass, output, bound: soloBound(output, "output", cheapestDriver, pass, settings), drivers, cheapestDriver });
     }
   }
-  slots.sort((a, b) => b.output.bound - a.output.bound || a.output.item.index - b.output.item.index || compareText(a.topology, b.topology));
-
   const kthScore = () => (heap.isFull ? (heap.worst()?.score ?? Number.POSITIVE_INFINITY) : Number.NEGATIVE_INFINITY);
-  for (const slot of slots) {
-    if (slot.output.bound < kthScore()) break;
-    const output = slot.output.item;
+  // A heap rather than a sort: the walk stops after a few outputs, so ordering them all would be wasted.
+  const slotQueue = new BestFirst(slots, (a, b) => compareSlots(a, b) < 0);
+  for (let slot = slotQueue.pop(); slot !== undefined; slot = slotQueue.pop()) {
+    if (slot.bound < kthScore()) break;
+    const output = slot.output;
     const thermal = boundOutputThermal(output, settings);
     // Even at the least current it can carry, the output overheats: every pair with it fails.
     if (thermal.fails) continue;
-    if (soloBound(output, "output", slot.cheapestDriver, settings, thermal) < kthScore()) continue;
-    for (const { item: driver, bound } of slot.drivers) {
-      if (bound < kthScore()) break;
+    if (soloBound(output, "output", slot.cheapestDriver, slot.pass, settings, thermal) < kthScore()) continue;
+    const reach = reachOutput(output, settings);
+    const { items: drivers, bounds } = slot.drivers;
+    for (let i = 0; i < drivers.length; i += 1) {
+      if (bounds[i] < kthScore()) break;
+      const driver = drivers[i];
       counts.considered += 1;
       if (!reaches(slot.topology, settings.requiredHfe, driver.maxGain, output.maxGain)) continue;
-      if (leastDriverCurrent(driver, output, peakIc) > driver.part.icMaxAmps) continue;
-      if (sheet.mode === "switching" && saturationMustFail(driver, output, sheet.allowedSatDropVolts)) continue;
-      if (pairBound(driver, output, thermal, slot.topology, settings) < kthScore()) continue;
+      if (leastDriverCurrent(driver.minGain, output.maxGain, peakIc) > driver.part.icMaxAmps) continue;
+      if (saturationExceeds(driver.leastSatVolts, output.outputVbeVolts, sheet)) continue;
+      if (pairBound(driver, output, thermal, slot.topology, settings, reach) < kthScore()) continue;
       counts.evaluated += 1;
       const ranked = scorePair(slot.topology, driver, output, settings);
       if (ranked === null) counts.failed += 1;

@@ -385,7 +385,8 @@ export interface CompoundScreen<P extends PartSpec = PartSpec> {
   dataQualityScore: number;
   bleedOhms: number | null;
   operating: PairCurrents;
-  withoutBleed: PairCurrents;
+  /** The pair's currents at the operating IC without the bleed resistor, solved when the explanation asks. */
+  solveWithoutBleed: () => PairCurrents;
   pairVbeVolts: number;
   gains: PairGainAt[];
   gain: GainJudgement;
@@ -435,6 +436,8 @@ export function screenCompound<P extends PartSpec>(
   output: P,
   sheet: RequirementSheet,
   options: CompoundOptions = {},
+  /** The devices' data-quality findings when the caller already has them (the search does). */
+  qualities?: [DataQuality, DataQuality],
 ): CompoundScreen<P> {
   if (!canPair(topology, driver, output)) {
     throw new RangeError(`a ${topology} pair needs ${topology === "darlington" ? "one polarity" : "opposite polarities"}`);
@@ -458,7 +461,6 @@ export function screenCompound<P extends PartSpec>(
 
   const operating = solve(icAmps, bleedOhms);
   const peak = peakIcAmps === icAmps ? operating : solve(peakIcAmps, bleedOhms);
-  const withoutBleed = bleedOhms === null ? operating : solve(icAmps, null);
   const driverGain = readGain(driverGains, operating.driverIcAmps);
   const outputGain = readGain(outputGains, operating.outputIcAmps);
   const driverVbe = chooseVbe(driver, operating.driverIcAmps, sheet.mode);
@@ -565,7 +567,7 @@ export function screenCompound<P extends PartSpec>(
   const driverDevice = deviceOf("driver", driver, driverGain, driverVbe, feasibleOr(operating.driverIcAmps, 0), feasibleOr(peak.driverIcAmps, 0), driverVce);
   const outputDevice = deviceOf("output", output, outputGain, outputVbe, feasibleOr(operating.outputIcAmps, icAmps), feasibleOr(peak.outputIcAmps, peakIcAmps), outputVce);
 
-  const quality: [DataQuality, DataQuality] = [assessDataQuality(driver, options), assessDataQuality(output, options)];
+  const quality: [DataQuality, DataQuality] = qualities ?? [assessDataQuality(driver, options), assessDataQuality(output, options)];
   if (quality[0].flags.includes("stale-datasheet") || quality[1].flags.includes("stale-datasheet")) screen.flags |= FLAG_BITS["stale-datasheet"];
   return {
     topology,
@@ -576,7 +578,7 @@ export function screenCompound<P extends PartSpec>(
     dataQualityScore: Math.min(quality[0].score, quality[1].score),
     bleedOhms,
     operating,
-    withoutBleed,
+    solveWithoutBleed: () => (bleedOhms === null ? operating : solve(icAmps, null)),
     pairVbeVolts,
     gains,
     gain,
@@ -612,7 +614,8 @@ function explainDevice<P extends PartSpec>(device: DeviceScreen<P>): DeviceInPai
 
 /** The explanations of a screened pair: every check's formula, inputs and summary, and the pair's figures. */
 export function explainCompound<P extends PartSpec>(screen: CompoundScreen<P>): CompoundEvaluation<P> {
-  const { topology, sheet, operating, withoutBleed, pairVbeVolts, bleedOhms, pairSat } = screen;
+  const { topology, sheet, operating, pairVbeVolts, bleedOhms, pairSat } = screen;
+  const withoutBleed = screen.solveWithoutBleed();
   const switching = sheet.mode === "switching";
   const driver = screen.devices.driver.part;
   const output = screen.devices.output.part;

@@ -17,20 +17,28 @@ export function roundToSeries(ohms: number, series: ESeriesName, direction: Roun
   if (!(ohms > 0) || !Number.isFinite(ohms)) throw new RangeError(`Cannot round ${ohms} Ω onto ${series}`);
   const values = SERIES[series];
   const decade = Math.floor(Math.log10(ohms));
-  // Candidates from the decade below to the decade above, so values near a decade edge round correctly.
-  const candidates = [decade - 1, decade, decade + 1].flatMap((power) => values.map((v) => toOhms(v, power)));
   const tolerance = ohms * 1e-9;
-  if (direction === "down") return Math.max(...candidates.filter((c) => c <= ohms + tolerance));
-  if (direction === "up") return Math.min(...candidates.filter((c) => c >= ohms - tolerance));
-  let best = candidates[0];
-  for (const candidate of candidates) {
-    if (Math.abs(Math.log(candidate / ohms)) < Math.abs(Math.log(best / ohms))) best = candidate;
+  // Candidates from the decade below to the decade above, so values near a decade edge round correctly; plain loops, as the pair search rounds often.
+  let down = Number.NEGATIVE_INFINITY;
+  let up = Number.POSITIVE_INFINITY;
+  let nearest = Number.NaN;
+  for (let power = decade - 1; power <= decade + 1; power += 1) {
+    for (let i = 0; i < values.length; i += 1) {
+      const candidate = toOhms(values[i], power);
+      if (candidate <= ohms + tolerance && candidate > down) down = candidate;
+      if (candidate >= ohms - tolerance && candidate < up) up = candidate;
+      if (direction === "nearest" && (Number.isNaN(nearest) || Math.abs(Math.log(candidate / ohms)) < Math.abs(Math.log(nearest / ohms)))) nearest = candidate;
+    }
   }
-  return best;
+  if (direction === "down") return down;
+  if (direction === "up") return up;
+  return nearest;
 }
 
 /** A series mantissa times a power of ten, rounded so that 4.7 × 10³ is exactly 4700. */
 function toOhms(mantissa: number, power: number): number {
   const value = mantissa * 10 ** power;
+  // A mantissa times 10⁰ is already exact; only negative powers need the rounding through text.
+  if (power === 0) return value;
   return power >= 1 ? Math.round(value) : Number(value.toPrecision(3));
 }

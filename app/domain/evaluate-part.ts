@@ -202,6 +202,11 @@ export function planSheet(sheet: RequirementSheet, options: EvaluateOptions = {}
   };
 }
 
+/** Whether the sheet's package list rules the part out, whatever its polarity (pairs judge polarity as a pair). */
+export function isOutsidePackages(prepared: PreparedPart, plan: SheetPlan): boolean {
+  return outsidePackages(prepared.packageKey, plan.allowedPackages);
+}
+
 /** Whether the sheet's polarity or packages rule the part out before any check. */
 export function isExcluded(prepared: PreparedPart, plan: SheetPlan): boolean {
   return outsidePolarity(prepared.part, plan.sheet) || outsidePackages(prepared.packageKey, plan.allowedPackages);

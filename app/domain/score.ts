@@ -180,12 +180,13 @@ export function validateWeights(weights: ScoreWeights): ScoreWeights {
  * components give a bound on the score with the same arithmetic.
  */
 export function combineScore(components: ScoreComponents, weights: ScoreWeights): number {
+  return combineScoreParts(components.margin, components.cost, components.stock, components.lifecycle, components.dataQuality, weights);
+}
+
+/** combineScore from the five components as numbers, for bounds worked out many times over without building objects. */
+export function combineScoreParts(margin: number, cost: number, stock: number, lifecycle: number, dataQuality: number, weights: ScoreWeights): number {
   const total = weights.margin + weights.cost + weights.stock + weights.lifecycle + weights.dataQuality;
   const weighted =
-    weights.margin * components.margin +
-    weights.cost * components.cost +
-    weights.stock * components.stock +
-    weights.lifecycle * components.lifecycle +
-    weights.dataQuality * components.dataQuality;
+    weights.margin * margin + weights.cost * cost + weights.stock * stock + weights.lifecycle * lifecycle + weights.dataQuality * dataQuality;
   return (100 * weighted) / total;
 }
