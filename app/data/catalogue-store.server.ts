@@ -203,6 +203,22 @@ export async function insertPartRevisions(revisions: readonly PartRevisionInsert
   );
 }
 
+/** The stored part rows as PartSpec JSON, built by PostgreSQL itself (same keys as PartSpec). */
+const PART_AS_JSON = `jsonb_build_object(${PART_FIELD_COLUMNS.map(([field, column, type]) => `'${field}', ${type === "date" ? `p.${column}::text` : `p.${column}`}`).join(", ")})`;
+
+/**
+ * One "created" revision per part, its `after` taken from the row just written: exactly what was stored,
+ * and no second copy of every value sent over the wire (a 100k-row intake saves most of a second).
+ */
+export async function insertCreationRevisions(partIds: readonly string[], intakeId: string, transaction: Transaction): Promise<void> {
+  if (partIds.length === 0) return;
+  await db().sequelize.query(
+    `INSERT INTO part_revisions (part_id, action, intake_id, before, after)
+     SELECT p.id, 'intake', $1, NULL, ${PART_AS_JSON} FROM parts p WHERE p.id = ANY($2::uuid[]) ORDER BY p.id`,
+    { bind: [intakeId, partIds], transaction },
+  );
+}
+
 // Identity look-ups beyond this many parts are sent in several statements.
 const CHUNK_ROWS = 20_000;
 

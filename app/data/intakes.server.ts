@@ -15,6 +15,7 @@ import {
   deleteParts,
   encodeSpec,
   findPartsByKeys,
+  insertCreationRevisions,
   insertMany,
   insertPartRevisions,
   insertParts,
@@ -309,8 +310,13 @@ interface ProblemSql {
 
 type StoredRow = [row: number, status: "new" | "changed" | "unchanged", value: unknown, changes: FieldChange[]];
 
+// Row by row, so the positional form of one row is garbage before the next is built (a 100k-row file stays lean).
 function encodeRows(kind: IntakeKind, rows: readonly ComparedRowRecord[]): string {
-  return JSON.stringify(rows.map((r): StoredRow => [r.row, r.status, kind === "parts" ? encodeSpec(r.value as PartSpec) : r.value, r.changes]));
+  const encoded = rows.map((r) => {
+    const stored: StoredRow = [r.row, r.status, kind === "parts" ? encodeSpec(r.value as PartSpec) : r.value, r.changes];
+    return JSON.stringify(stored);
+  });
+  return `[${encoded.join(",")}]`;
 }
 
 function decodeRows(kind: IntakeKind, stored: readonly StoredRow[]): ComparedRowRecord[] {
@@ -434,15 +440,18 @@ async function commitParts(intake: IntakeSql, byUserId: string, transaction: Tra
     const key = partKey(spec.manufacturer, spec.partNumber);
     const before = comparison.existing.get(key);
     if (row.status === "new") {
-      const id = randomUUID();
-      created.push({ id, spec });
-      revisions.push({ partId: id, action: "intake", intakeId: intake.id, editorId: null, before: null, after: spec });
+      created.push({ id: randomUUID(), spec });
     } else if (row.status === "changed" && before) {
       changed.push({ id: before.id, spec });
       revisions.push({ partId: before.id, action: "intake", intakeId: intake.id, editorId: null, before: before.spec, after: spec });
     }
   }
   await insertParts(created, transaction);
+  await insertCreationRevisions(
+    created.map((c) => c.id),
+    intake.id,
+    transaction,
+  );
   await updateParts(changed, transaction);
   await insertPartRevisions(revisions, transaction);
   await refreshStoredRows(intake, preview, comparison.rows, transaction);

@@ -16,8 +16,8 @@ import {
   screenCompound,
   findCompoundExclusions,
 } from "./compound";
-import { decadesOutside, DEFAULT_GAIN_WINDOW_DECADES, DEFAULT_TYP_TO_MIN_FACTOR, type PreparedGain, type PreparedSaturation, prepareGain } from "./gain-curve";
-import { chooseVbe, isOutsidePackages, planSheet, qualityOf, type SheetPlan } from "./evaluate-part";
+import { decadesOutside, DEFAULT_GAIN_WINDOW_DECADES, DEFAULT_TYP_TO_MIN_FACTOR, prepareGain } from "./gain-curve";
+import { chooseVbe, chooseVbeInto, isOutsidePackages, planSheet, type PreparedPart, qualityOf, type SheetPlan } from "./evaluate-part";
 import type { PartSpec, Polarity } from "./part";
 import { compareText, type CatalogueEntry, type PreparedCatalogue, prepareCatalogue, type RankingOptions, supplyOf, type SupplyFacts } from "./rank";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
@@ -97,6 +97,11 @@ interface PartFacts<P extends PartSpec> {
   part: P;
   supply: SupplyFacts;
   unitPrice: number | null;
+  /** Copied from the part and its supply so the pair loops read one object. */
+  polarity: Polarity;
+  icMaxAmps: number;
+  stockScore: number;
+  lifecycleScore: number;
   quality: DataQuality;
   dataQuality: number;
   /** The voltage check's margin share, exact: both roles stand the full peak VCE. */
@@ -140,20 +145,12 @@ const GAIN_RANGE_SLACK = 1e-12;
  * beyond has its extremes on the quoted points, so they are read off the prepared curve and scaled
  * as worstCaseGain scales them, widened by a hair to cover the gain model's rounding.
  */
-function gainRange(gain: PreparedGain, factor: number, out: { maxGain: number; minGain: number }): void {
-  const curve = gain.worstCurve;
-  out.maxGain = 0;
-  out.minGain = 0;
-  if (curve === null) return;
-  const scale = gain.worstCorner === "min" ? 1 : gain.worstCorner === "typ" ? factor : factor * factor;
-  let maxGain = 0;
-  let minGain = Number.POSITIVE_INFINITY;
-  for (const value of curve.values) {
-    maxGain = Math.max(maxGain, value * scale);
-    minGain = Math.min(minGain, value * scale);
-  }
-  out.maxGain = maxGain * (1 + GAIN_RANGE_SLACK);
-  out.minGain = minGain * (1 - GAIN_RANGE_SLACK);
+function gainRange(prepared: PreparedPart, factor: number, out: { maxGain: number; minGain: number }): void {
+  const corner = prepared.gain.worstCorner;
+  // Scaling by a positive factor keeps the order, so the extremes of the scaled curve are the scaled extremes.
+  const scale = corner === "min" ? 1 : corner === "typ" ? factor : factor * factor;
+  out.maxGain = corner === null ? 0 : prepared.worstGainMax * scale * (1 + GAIN_RANGE_SLACK);
+  out.minGain = corner === null ? 0 : prepared.worstGainMin * scale * (1 - GAIN_RANGE_SLACK);
 }
 
 /**
@@ -166,14 +163,6 @@ function leastOutputCurrent(icAmps: number, minGain: number, settings: BaseSetti
   return (Math.max(0, icAmps - bleedLimit) * minGain) / (minGain + 1);
 }
 
-/** The lowest VCE(sat) vceSatAt can return: held flat below, log-log between and rising above the quoted points. */
-function leastSaturationVolts(saturation: PreparedSaturation | null): number | null {
-  if (saturation === null) return null;
-  let least = Number.POSITIVE_INFINITY;
-  for (const volts of saturation.curve.values) least = Math.min(least, volts);
-  return least;
-}
-
 const factBuffers = new WeakMap<PreparedCatalogue, PartFacts<PartSpec>[]>();
 
 function blankFacts<P extends PartSpec>(index: number, part: P): PartFacts<P> {
@@ -182,6 +171,10 @@ function blankFacts<P extends PartSpec>(index: number, part: P): PartFacts<P> {
     part,
     supply: { price: null, stockScore: 0, lifecycleScore: 0 },
     unitPrice: null,
+    polarity: part.polarity,
+    icMaxAmps: part.icMaxAmps,
+    stockScore: 0,
+    lifecycleScore: 0,
     quality: { flags: [], score: 0 },
     dataQuality: 0,
     voltageShare: 0,
@@ -213,17 +206,20 @@ function collectFacts<P extends PartSpec>(entries: readonly CatalogueEntry<P>[],
     factBuffers.set(catalogue, facts as unknown as PartFacts<PartSpec>[]);
   }
   const range = { maxGain: 0, minGain: 0 };
+  const vbe = { volts: 0, assumed: false };
   for (let index = 0; index < prepared.length; index += 1) {
     const entry = prepared[index];
     const part = entry.part;
     const supply = supplyOf(entry, sheet.orderQuantity, currency);
     const quality = qualityOf(entry, plan);
     readRating(peakVce, part.vceoVolts, sheet.derating.voltageFraction, voltage);
-    gainRange(entry.gain, factor, range);
+    gainRange(entry, factor, range);
     readRating(leastOutputCurrent(peakIc, range.minGain, settings), part.icMaxAmps, sheet.derating.currentFraction, current);
     const fact = facts[index];
     fact.supply = supply;
     fact.unitPrice = supply.price?.effectiveUnitPrice ?? null;
+    fact.stockScore = supply.stockScore;
+    fact.lifecycleScore = supply.lifecycleScore;
     fact.quality = quality;
     fact.dataQuality = quality.score;
     fact.voltageShare = shareOfMargin(voltage.margin, fullMargin);
@@ -232,8 +228,8 @@ function collectFacts<P extends PartSpec>(entries: readonly CatalogueEntry<P>[],
     fact.minGain = range.minGain;
     fact.outputCurrentShare = shareOfMargin(current.margin, fullMargin);
     fact.outputFails = current.verdict === "fails";
-    fact.outputVbeVolts = chooseVbe(part, sheet.operatingIcAmps, "linear").volts;
-    fact.leastSatVolts = leastSaturationVolts(entry.saturation);
+    fact.outputVbeVolts = chooseVbeInto(part, sheet.operatingIcAmps, "linear", vbe).volts;
+    fact.leastSatVolts = entry.leastSatVolts;
   }
   return facts;
 }
@@ -369,8 +365,8 @@ function buildPasses<P extends PartSpec>(facts: PartFacts<P>[], settings: BaseSe
   const passes: Pass<P>[] = [];
   for (const topology of topologies) {
     for (const polarity of polarities) {
-      const drivers = facts.filter((f) => f.usable && f.part.polarity === polarity);
-      const outputs = facts.filter((f) => f.usable && !f.outputFails && f.part.polarity === outputPolarity(topology, polarity));
+      const drivers = facts.filter((f) => f.usable && f.polarity === polarity);
+      const outputs = facts.filter((f) => f.usable && !f.outputFails && f.polarity === outputPolarity(topology, polarity));
       if (drivers.length === 0 || outputs.length === 0) continue;
       const partners = extremesOf(drivers, outputs);
       passes.push({
@@ -378,7 +374,7 @@ function buildPasses<P extends PartSpec>(facts: PartFacts<P>[], settings: BaseSe
         drivers: drivers.filter(
           (f) =>
             reaches(topology, requiredHfe, f.maxGain, partners.bestOutputGain) &&
-            leastDriverCurrent(f.minGain, partners.bestOutputGain, peakIc) <= f.part.icMaxAmps &&
+            leastDriverCurrent(f.minGain, partners.bestOutputGain, peakIc) <= f.icMaxAmps &&
             !saturationExceeds(f.leastSatVolts, partners.leastOutputVbe, sheet),
         ),
         outputs: outputs.filter(
@@ -439,7 +435,7 @@ function pairMarginBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec
   if (thermal.share !== null) least = Math.min(least, thermal.share);
   return Math.min(
     least,
-    crossShareBound(driver.part.icMaxAmps, driver.minGain, driver.maxGain, driver.leastSatVolts, output.maxGain, output.outputVbeVolts, topology, settings, outputGainCap),
+    crossShareBound(driver.icMaxAmps, driver.minGain, driver.maxGain, driver.leastSatVolts, output.maxGain, output.outputVbeVolts, topology, settings, outputGainCap),
   );
 }
 
@@ -470,10 +466,10 @@ function soloBound(
         )
       : Math.min(
           facts.voltageShare,
-          crossShareBound(facts.part.icMaxAmps, facts.minGain, facts.maxGain, facts.leastSatVolts, partners.bestOutputGain, partners.leastOutputVbe, topology, settings),
+          crossShareBound(facts.icMaxAmps, facts.minGain, facts.maxGain, facts.leastSatVolts, partners.bestOutputGain, partners.leastOutputVbe, topology, settings),
         );
   if (thermal?.share != null) margin = Math.min(margin, thermal.share);
-  return scoreBound(margin, sumPrices(facts.unitPrice, cheapestPartner), facts.supply.stockScore, facts.supply.lifecycleScore, facts.dataQuality, settings);
+  return scoreBound(margin, sumPrices(facts.unitPrice, cheapestPartner), facts.stockScore, facts.lifecycleScore, facts.dataQuality, settings);
 }
 
 /** What the search learns about an output once it reaches it: a cap on its gain and whether its gain is surely quoted far off. */
@@ -487,8 +483,8 @@ function pairBound(driver: PartFacts<PartSpec>, output: PartFacts<PartSpec>, the
   return scoreBound(
     pairMarginBound(driver, output, thermal, topology, settings, reach.gainCap),
     sumPrices(driver.unitPrice, output.unitPrice),
-    Math.min(driver.supply.stockScore, output.supply.stockScore),
-    Math.min(driver.supply.lifecycleScore, output.supply.lifecycleScore),
+    Math.min(driver.stockScore, output.stockScore),
+    Math.min(driver.lifecycleScore, output.lifecycleScore),
     scoreRecordQuality(Math.min(driver.dataQuality, output.dataQuality), reach.offPoint),
     settings,
   );
@@ -640,18 +636,12 @@ function rankDrivers<P extends PartSpec>(drivers: PartFacts<P>[], boundOf: (fact
   return { items: order.map((i) => drivers[i]), bounds: sortedBounds };
 }
 
-/** One output in one pass, with the drivers it may pair with in falling order of their bounds. */
-interface Slot<P extends PartSpec> {
-  topology: CompoundTopology;
+/** One pass made ready to walk: its drivers in falling order of their bounds, and the bound of each output. */
+interface PassWalk<P extends PartSpec> {
   pass: Pass<P>;
-  output: PartFacts<P>;
-  bound: number;
   drivers: RankedDrivers<P>;
+  outputBounds: Float64Array;
   cheapestDriver: number | null;
-}
-
-function compareSlots(a: Slot<PartSpec>, b: Slot<PartSpec>): number {
-  return b.bound - a.bound || a.output.index - b.output.index || compareText(a.topology, b.topology);
 }
 
 /** A binary heap with the best item on top: yields items best first without sorting them all. */
@@ -709,21 +699,35 @@ export function searchCompounds<P extends PartSpec>(
   const heap = new TopK<RankedCompound<P>>(k, compareRankedCompounds);
   const peakIc = peakIcOf(sheet);
   const counts = { considered: 0, evaluated: 0, failed: 0 };
-  const slots: Slot<P>[] = [];
+  // Every (pass, output) slot as a number, so ordering them builds no object per output.
+  const walks: PassWalk<P>[] = [];
+  const slotWalk: number[] = [];
+  const slotOutput: number[] = [];
   for (const pass of passes) {
     const cheapestDriver = cheapestPrice(pass.drivers);
     const cheapestOutput = cheapestPrice(pass.outputs);
     const drivers = rankDrivers(pass.drivers, (item) => soloBound(item, "driver", cheapestOutput, pass, settings));
-    for (const output of pass.outputs) {
-      slots.push({ topology: pass.topology, pass, output, bound: soloBound(output, "output", cheapestDriver, pass, settings), drivers, cheapestDriver });
+    const outputBounds = new Float64Array(pass.outputs.length);
+    for (let i = 0; i < pass.outputs.length; i += 1) {
+      outputBounds[i] = soloBound(pass.outputs[i], "output", cheapestDriver, pass, settings);
+      slotWalk.push(walks.length);
+      slotOutput.push(i);
     }
+    walks.push({ pass, drivers, outputBounds, cheapestDriver });
   }
+  const boundOf = (slot: number) => walks[slotWalk[slot]].outputBounds[slotOutput[slot]];
+  const outputOf = (slot: number) => walks[slotWalk[slot]].pass.outputs[slotOutput[slot]];
+  // Best bound first; ties by catalogue position, then topology, as a sort by compareSlots would give.
+  const before = (a: number, b: number) =>
+    (boundOf(b) - boundOf(a) || outputOf(a).index - outputOf(b).index || compareText(walks[slotWalk[a]].pass.topology, walks[slotWalk[b]].pass.topology)) < 0;
   const kthScore = () => (heap.isFull ? (heap.worst()?.score ?? Number.POSITIVE_INFINITY) : Number.NEGATIVE_INFINITY);
   // A heap rather than a sort: the walk stops after a few outputs, so ordering them all would be wasted.
-  const slotQueue = new BestFirst(slots, (a, b) => compareSlots(a, b) < 0);
-  for (let slot = slotQueue.pop(); slot !== undefined; slot = slotQueue.pop()) {
-    if (slot.bound < kthScore()) break;
-    const output = slot.output;
+  const slotQueue = new BestFirst(Array.from(slotWalk.keys()), before);
+  for (let id = slotQueue.pop(); id !== undefined; id = slotQueue.pop()) {
+    if (boundOf(id) < kthScore()) break;
+    const slot = walks[slotWalk[id]];
+    const topology = slot.pass.topology;
+    const output = outputOf(id);
     const thermal = boundOutputThermal(output, settings);
     // Even at the least current it can carry, the output overheats: every pair with it fails.
     if (thermal.fails) continue;
@@ -734,12 +738,12 @@ export function searchCompounds<P extends PartSpec>(
       if (bounds[i] < kthScore()) break;
       const driver = drivers[i];
       counts.considered += 1;
-      if (!reaches(slot.topology, settings.requiredHfe, driver.maxGain, output.maxGain)) continue;
-      if (leastDriverCurrent(driver.minGain, output.maxGain, peakIc) > driver.part.icMaxAmps) continue;
+      if (!reaches(topology, settings.requiredHfe, driver.maxGain, output.maxGain)) continue;
+      if (leastDriverCurrent(driver.minGain, output.maxGain, peakIc) > driver.icMaxAmps) continue;
       if (saturationExceeds(driver.leastSatVolts, output.outputVbeVolts, sheet)) continue;
-      if (pairBound(driver, output, thermal, slot.topology, settings, reach) < kthScore()) continue;
+      if (pairBound(driver, output, thermal, topology, settings, reach) < kthScore()) continue;
       counts.evaluated += 1;
-      const ranked = scorePair(slot.topology, driver, output, settings);
+      const ranked = scorePair(topology, driver, output, settings);
       if (ranked === null) counts.failed += 1;
       else heap.push(ranked);
     }

@@ -22,15 +22,15 @@ import {
   type GainReading,
   newGainReading,
   newSaturationEstimate,
-  type PreparedGain,
+  buildPreparedSaturation,
+  buildWorstGain,
   type PreparedSaturation,
-  prepareGain,
-  prepareSaturation,
   ratioDistance,
   readSaturation,
   readWorstCaseGain,
   type SaturationEstimate,
   type WorstCaseGainOptions,
+  type WorstGain,
 } from "./gain-curve";
 import type { PartSpec } from "./part";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
@@ -79,7 +79,8 @@ export function chooseVbe(part: PartSpec, icAmps: number, mode: RequirementSheet
   return chooseVbeInto(part, icAmps, mode, { volts: 0, assumed: false });
 }
 
-function chooseVbeInto(part: PartSpec, icAmps: number, mode: RequirementSheet["mode"], out: VbeChoice): VbeChoice {
+/** chooseVbe written into a reusable object. */
+export function chooseVbeInto(part: PartSpec, icAmps: number, mode: RequirementSheet["mode"], out: VbeChoice): VbeChoice {
   if (mode === "switching") {
     const nearest = nearestSaturationPoint(part, icAmps);
     if (nearest?.vbeSatVolts != null) {
@@ -134,9 +135,13 @@ export function findExclusions(part: PartSpec, sheet: RequirementSheet): string[
 /** What the engine works out once per part and reuses in every ranking of its catalogue. */
 export interface PreparedPart<P extends PartSpec = PartSpec> {
   part: P;
-  gain: PreparedGain;
+  gain: WorstGain;
   saturation: PreparedSaturation | null;
   packageKey: string;
+  /** The unscaled extremes of the worst-case curve's quoted values (0 when none), and the lowest VCE(sat) quoted (null when none): bounds the pair search reads. */
+  worstGainMax: number;
+  worstGainMin: number;
+  leastSatVolts: number | null;
   /** The data-quality findings for the options named by qualityKey (staleness depends on the date). */
   qualityKey: string | null;
   quality: DataQuality | null;
@@ -144,11 +149,17 @@ export interface PreparedPart<P extends PartSpec = PartSpec> {
 
 /** Sorted, log-space gain and saturation curves and the package key of one part. */
 export function preparePart<P extends PartSpec>(part: P): PreparedPart<P> {
+  const gain = buildWorstGain(part.gainPoints);
+  const saturation = buildPreparedSaturation(part.saturationPoints);
+  const values = gain.worstCurve?.values ?? [];
   return {
     part,
-    gain: prepareGain(part.gainPoints),
-    saturation: prepareSaturation(part.saturationPoints),
+    gain,
+    saturation,
     packageKey: packageKeyOf(part.packageName),
+    worstGainMax: values.length === 0 ? 0 : Math.max(...values),
+    worstGainMin: values.length === 0 ? 0 : Math.min(...values),
+    leastSatVolts: saturation === null ? null : Math.min(...saturation.curve.values),
     qualityKey: null,
     quality: null,
   };

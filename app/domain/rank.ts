@@ -120,7 +120,7 @@ export function readSupply(offers: readonly Offer[], lifecycle: Lifecycle, order
 }
 
 /** A catalogue part with what the engine works out once per catalogue state. */
-interface PreparedEntry<P extends PartSpec> extends PreparedPart<P> {
+export interface PreparedEntry<P extends PartSpec = PartSpec> extends PreparedPart<P> {
   offers: readonly Offer[];
   /** Position in compareParts order, for sorting results without comparing strings. */
   order: number;
@@ -152,6 +152,9 @@ export function prepareCatalogue<P extends PartSpec>(entries: readonly Catalogue
       gain: part.gain,
       saturation: part.saturation,
       packageKey: part.packageKey,
+      worstGainMax: part.worstGainMax,
+      worstGainMin: part.worstGainMin,
+      leastSatVolts: part.leastSatVolts,
       qualityKey: part.qualityKey,
       quality: part.quality,
       offers: entry.offers,

@@ -35,8 +35,17 @@ export async function recreateDatabase(name: string): Promise<string> {
   return databaseUrl(name);
 }
 
+/** Drops a test database; retried because an autovacuum worker can briefly hold it even under FORCE. */
 export async function dropDatabase(name: string): Promise<void> {
-  await withMaintenanceClient((client) => client.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`));
+  for (let attempt = 1; ; attempt += 1) {
+    try {
+      await withMaintenanceClient((client) => client.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`));
+      return;
+    } catch (error) {
+      if (attempt >= 5) throw error;
+      await new Promise((resolve) => setTimeout(resolve, 500 * attempt));
+    }
+  }
 }
 
 export function connect(url: string): Sequelize {
