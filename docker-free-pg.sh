@@ -39,7 +39,8 @@ ensure_installed() {
 
 # As root, the server runs as the postgres system user, which refuses to run as root.
 as_owner() {
-  if [ "$(id -u)" -eq 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  # From / so that a checkout the postgres user cannot enter does not trouble it.
+  if [ "$(id -u)" -eq 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 choose_data_dir() {

@@ -11,6 +11,7 @@ import { db } from "#app/lib/db.server.ts";
 import { queueIntakeReport, startJobs } from "#app/lib/jobs.server.ts";
 import {
   bumpCatalogueVersion,
+  copyRows,
   decodeSpec,
   deleteParts,
   encodeSpec,
@@ -236,18 +237,22 @@ async function compareOffers(
 /** Parses and compares an uploaded file, storing the file, its problems and its rows; the catalogue is not touched. */
 export async function previewIntake(input: { kind: IntakeKind; fileName: string; bytes: Uint8Array; uploadedBy: string }): Promise<IntakeView> {
   const comparedAtVersion = await readCatalogueVersion();
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "p0");
   const parsed = parseIntakeFile(input.kind, input.bytes);
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "parsed");
   const fileRefused = hasFileError(parsed.problems);
   const comparison: Comparison =
     parsed.kind === "parts" ? await compareParts(fileRefused ? [] : parsed.rows) : await compareOffers(fileRefused ? [] : parsed.rows);
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "pcompared");
   const problems = [...parsed.problems, ...comparison.extraProblems];
   const id = randomUUID();
   const sequelize = db().sequelize;
   await sequelize.transaction(async (transaction) => {
+    const parsedRows = await copyParsedRows(parsed.kind, comparison.rows, transaction);
     await sequelize.query(
       `INSERT INTO intakes (id, kind, file_name, size_bytes, file_bytes, uploaded_by, state, file_refused, new_count, changed_count,
          unchanged_count, rejected_count, warning_count, problem_count, parsed_rows, compared_at_version, created_at, updated_at)
-       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, $14, $15, clock_timestamp(), clock_timestamp())`,
+       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, ${parsedRows}, $14, clock_timestamp(), clock_timestamp())`,
       {
         bind: [
           id,
@@ -263,7 +268,6 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
           countRejectedRows(problems),
           problems.filter((p) => p.severity === "warning").length,
           problems.length,
-          encodeRows(parsed.kind, comparison.rows),
           comparedAtVersion,
         ],
         transaction,
@@ -284,6 +288,7 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
       transaction,
     );
   });
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "pstored");
   const stored = await selectIntake(id);
   return toView(stored!);
 }
@@ -311,12 +316,34 @@ interface ProblemSql {
 type StoredRow = [row: number, status: "new" | "changed" | "unchanged", value: unknown, changes: FieldChange[]];
 
 // Row by row, so the positional form of one row is garbage before the next is built (a 100k-row file stays lean).
-function encodeRows(kind: IntakeKind, rows: readonly ComparedRowRecord[]): string {
-  const encoded = rows.map((r) => {
+function* encodeRows(kind: IntakeKind, rows: readonly ComparedRowRecord[]): Generator<[number, string]> {
+  for (let n = 0; n < rows.length; n += 1) {
+    const r = rows[n]!;
     const stored: StoredRow = [r.row, r.status, kind === "parts" ? encodeSpec(r.value as PartSpec) : r.value, r.changes];
-    return JSON.stringify(stored);
-  });
-  return `[${encoded.join(",")}]`;
+    yield [n, JSON.stringify(stored)];
+  }
+}
+
+let parsedRowsScratch = 0;
+
+/**
+ * COPYs the stored form of the rows into a scratch table and returns the SQL that aggregates them into one
+ * JSON array: the 100k-row array is never one string in this process, nor one bind parameter.
+ */
+async function copyParsedRows(kind: IntakeKind, rows: readonly ComparedRowRecord[], transaction: Transaction): Promise<string> {
+  parsedRowsScratch += 1;
+  const scratch = `scratch_parsed_rows_${parsedRowsScratch}`;
+  await db().sequelize.query(`CREATE TEMP TABLE ${scratch} (n int4 NOT NULL, r json NOT NULL) ON COMMIT DROP`, { transaction });
+  await copyRows(
+    scratch,
+    [
+      ["n", "int4"],
+      ["r", "json"],
+    ],
+    encodeRows(kind, rows),
+    transaction,
+  );
+  return `(SELECT COALESCE(json_agg(r ORDER BY n), '[]'::json) FROM ${scratch})`;
 }
 
 function decodeRows(kind: IntakeKind, stored: readonly StoredRow[]): ComparedRowRecord[] {
@@ -404,7 +431,8 @@ async function markCommitted(intakeId: string, byUserId: string, counts: Compari
 async function refreshStoredRows(intake: IntakeSql, preview: readonly ComparedRowRecord[], now: readonly ComparedRowRecord[], transaction: Transaction): Promise<void> {
   const before = new Map(preview.map((r) => [r.row, `${r.status}${JSON.stringify(r.changes)}`]));
   if (now.length === preview.length && now.every((r) => before.get(r.row) === `${r.status}${JSON.stringify(r.changes)}`)) return;
-  await db().sequelize.query(`UPDATE intakes SET parsed_rows = $2 WHERE id = $1`, { bind: [intake.id, encodeRows(intake.kind, now)], transaction });
+  const parsedRows = await copyParsedRows(intake.kind, now, transaction);
+  await db().sequelize.query(`UPDATE intakes SET parsed_rows = ${parsedRows} WHERE id = $1`, { bind: [intake.id], transaction });
 }
 
 /** True when no commit, rollback or edit happened since the preview compared (the caller holds the catalogue lock). */
@@ -424,7 +452,9 @@ async function reusePartsComparison(preview: ComparedRowRecord[], transaction: T
 }
 
 async function commitParts(intake: IntakeSql, byUserId: string, transaction: Transaction): Promise<Comparison["counts"]> {
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "c0");
   const preview = await readStoredRows(intake, transaction);
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "read");
   const comparison = (await catalogueUnchangedSince(intake, transaction))
     ? await reusePartsComparison(preview, transaction)
     : // Compared again against the catalogue as it is now: it changed since the preview.
@@ -446,15 +476,19 @@ async function commitParts(intake: IntakeSql, byUserId: string, transaction: Tra
       revisions.push({ partId: before.id, action: "intake", intakeId: intake.id, editorId: null, before: before.spec, after: spec });
     }
   }
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "compared");
   await insertParts(created, transaction);
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "inserted");
   await insertCreationRevisions(
     created.map((c) => c.id),
     intake.id,
     transaction,
   );
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "revs");
   await updateParts(changed, transaction);
   await insertPartRevisions(revisions, transaction);
   await refreshStoredRows(intake, preview, comparison.rows, transaction);
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "refreshed");
   return comparison.counts;
 }
 
@@ -523,7 +557,9 @@ function withoutId(offer: (Offer & { id: string }) | null): Offer | null {
 }
 
 async function commitOffers(intake: IntakeSql, transaction: Transaction): Promise<Comparison["counts"]> {
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "c0");
   const preview = await readStoredRows(intake, transaction);
+  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "read");
   const comparison = await compareOffers(
     preview.map((r) => ({ row: r.row, value: r.value as OfferRow })),
     transaction,

@@ -1,4 +1,4 @@
-import { Op } from "sequelize";
+import { Op, QueryTypes } from "sequelize";
 import { db } from "#app/lib/db.server.ts";
 import { isRole, type Role } from "#app/lib/roles.ts";
 
@@ -36,14 +36,44 @@ export function normaliseEmail(email: string): string {
   return email.trim().toLowerCase();
 }
 
+interface PersonSql {
+  id: string;
+  email: string;
+  display_name: string;
+  active: boolean;
+  roles: string[];
+  team_name: string | null;
+  last_sign_in_at: Date | null;
+}
+
+// One statement and no model instances: this runs on every signed-in request (the person is never cached).
+const PERSON_SELECT = `SELECT u.id, u.email, u.display_name, u.active, u.last_sign_in_at, t.name AS team_name,
+  ARRAY(SELECT r.role FROM user_roles r WHERE r.user_id = u.id) AS roles
+  FROM users u LEFT JOIN teams t ON t.id = u.team_id`;
+
+function sqlToPerson(row: PersonSql): Person {
+  return {
+    id: row.id,
+    email: row.email,
+    displayName: row.display_name,
+    active: row.active,
+    roles: row.roles.filter(isRole).sort(),
+    teamName: row.team_name,
+    lastSignInAt: row.last_sign_in_at ? new Date(row.last_sign_in_at).toISOString() : null,
+  };
+}
+
+async function selectPerson(where: string, value: string): Promise<Person | null> {
+  const [row] = await db().sequelize.query<PersonSql>(`${PERSON_SELECT} WHERE ${where} = $1`, { bind: [value], type: QueryTypes.SELECT, raw: true });
+  return row ? sqlToPerson(row) : null;
+}
+
 export async function findPersonByEmail(email: string): Promise<Person | null> {
-  const user = await db().User.findOne({ where: { email: normaliseEmail(email) }, include: withRolesAndTeam() });
-  return user ? toPerson(user) : null;
+  return selectPerson("u.email", normaliseEmail(email));
 }
 
 export async function findPersonById(id: string): Promise<Person | null> {
-  const user = await db().User.findByPk(id, { include: withRolesAndTeam() });
-  return user ? toPerson(user) : null;
+  return selectPerson("u.id", id);
 }
 
 export async function listPeople(): Promise<Person[]> {
