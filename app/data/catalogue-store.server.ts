@@ -219,6 +219,41 @@ export async function insertCreationRevisions(partIds: readonly string[], intake
   );
 }
 
+/** SQL for one PART_FIELD_COLUMNS value of a spec stored by `encodeSpec` (a json array), typed for its column. */
+function encodedFieldSql(encoded: string, index: number, type: string): string {
+  const field = PART_FIELD_COLUMNS[index]![0];
+  if (field === "gainPoints" || field === "saturationPoints") {
+    const keys = field === "gainPoints" ? GAIN_KEYS : SAT_KEYS;
+    const point = keys.map((key, j) => `'${key}', pt.v->${j}`).join(", ");
+    return `(SELECT COALESCE(jsonb_agg(jsonb_build_object(${point}) ORDER BY pt.n), '[]'::jsonb)
+      FROM json_array_elements(${encoded}->${index}) WITH ORDINALITY AS pt(v, n))`;
+  }
+  return `(${encoded}->>${index})::${type}`;
+}
+
+/**
+ * Inserts one part per encoded spec that `source` (a FROM item with a json column `spec`) yields, each with its
+ * "created" revision, in one statement inside PostgreSQL: no spec crosses the wire again. Returns how many.
+ */
+export async function insertPartsFromEncoded(source: string, bind: unknown[], intakeIdParam: string, transaction: Transaction): Promise<number> {
+  const columns = PART_FIELD_COLUMNS.map(([, column]) => column).join(", ");
+  const values = PART_FIELD_COLUMNS.map(([, , type], i) => encodedFieldSql("s.spec", i, type)).join(",\n      ");
+  // The revision sort of 100k rows stays in memory instead of spilling to disk.
+  await db().sequelize.query(`SET LOCAL work_mem = '64MB'`, { transaction });
+  const [rows] = (await db().sequelize.query(
+    `WITH created AS (
+       INSERT INTO parts (id, ${columns}) SELECT gen_random_uuid(), ${values} FROM ${source}
+       RETURNING *
+     ), revised AS (
+       INSERT INTO part_revisions (part_id, action, intake_id, before, after)
+       SELECT p.id, 'intake', ${intakeIdParam}, NULL, ${PART_AS_JSON} FROM created p ORDER BY p.id
+     )
+     SELECT count(*)::int AS created FROM created`,
+    { bind, transaction },
+  )) as [Array<{ created: number }>, unknown];
+  return rows[0]?.created ?? 0;
+}
+
 // Identity look-ups beyond this many parts are sent in several statements.
 const CHUNK_ROWS = 20_000;
 

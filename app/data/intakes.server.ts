@@ -19,6 +19,7 @@ import {
   insertCreationRevisions,
   insertMany,
   insertPartRevisions,
+  insertPartsFromEncoded,
   insertParts,
   lockCatalogue,
   normaliseSpecInPlace,
@@ -237,13 +238,10 @@ async function compareOffers(
 /** Parses and compares an uploaded file, storing the file, its problems and its rows; the catalogue is not touched. */
 export async function previewIntake(input: { kind: IntakeKind; fileName: string; bytes: Uint8Array; uploadedBy: string }): Promise<IntakeView> {
   const comparedAtVersion = await readCatalogueVersion();
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "p0");
   const parsed = parseIntakeFile(input.kind, input.bytes);
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "parsed");
   const fileRefused = hasFileError(parsed.problems);
   const comparison: Comparison =
     parsed.kind === "parts" ? await compareParts(fileRefused ? [] : parsed.rows) : await compareOffers(fileRefused ? [] : parsed.rows);
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "pcompared");
   const problems = [...parsed.problems, ...comparison.extraProblems];
   const id = randomUUID();
   const sequelize = db().sequelize;
@@ -288,7 +286,6 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
       transaction,
     );
   });
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "pstored");
   const stored = await selectIntake(id);
   return toView(stored!);
 }
@@ -356,6 +353,18 @@ async function readStoredRows(intake: IntakeSql, transaction?: Transaction): Pro
     type: QueryTypes.SELECT,
     transaction,
   });
+  return decodeRows(intake.kind, row?.parsed_rows ?? []);
+}
+
+// The stored rows, each with its position, as a FROM item (PostgreSQL reads the JSON, this process does not).
+const STORED_ROWS = `intakes i CROSS JOIN LATERAL json_array_elements(i.parsed_rows) WITH ORDINALITY AS s(stored, n)`;
+
+/** The stored rows that are not new, in file order: all a commit needs in this process when it can reuse the preview. */
+async function readStoredRowsExceptNew(intake: IntakeSql, transaction: Transaction): Promise<ComparedRowRecord[]> {
+  const [row] = await db().sequelize.query<{ parsed_rows: StoredRow[] }>(
+    `SELECT COALESCE(json_agg(s.stored ORDER BY s.n), '[]'::json) AS parsed_rows FROM ${STORED_ROWS} WHERE i.id = $1 AND s.stored->>1 <> 'new'`,
+    { bind: [intake.id], type: QueryTypes.SELECT, transaction },
+  );
   return decodeRows(intake.kind, row?.parsed_rows ?? []);
 }
 
@@ -440,28 +449,47 @@ async function catalogueUnchangedSince(intake: IntakeSql, transaction: Transacti
   return (await readCatalogueVersion(transaction)) === Number(intake.compared_at_version);
 }
 
-/** The preview's comparison as stored; only the parts it found need reading again (for their ids and values). */
-async function reusePartsComparison(preview: ComparedRowRecord[], transaction: Transaction): Promise<Comparison & { existing: ExistingParts }> {
-  const counts = { new: 0, changed: 0, unchanged: 0 };
-  for (const row of preview) counts[row.status] += 1;
+/**
+ * Commits a preview the catalogue has not moved past: its new parts go from the stored rows straight into
+ * the catalogue inside PostgreSQL; only the changed rows are read here, for their revisions.
+ */
+async function commitPreviewedParts(intake: IntakeSql, transaction: Transaction): Promise<Comparison["counts"]> {
+  const kept = await readStoredRowsExceptNew(intake, transaction);
   const existing = await findExisting(
-    preview.filter((r) => r.status !== "new").map((r) => r.value as PartSpec),
+    kept.map((r) => r.value as PartSpec),
     transaction,
   );
-  return { rows: preview, counts, extraProblems: [], existing };
+  const created = await insertPartsFromEncoded(
+    `(SELECT s.stored->2 AS spec FROM ${STORED_ROWS} WHERE i.id = $1 AND s.stored->>1 = 'new' ORDER BY s.n) s`,
+    [intake.id],
+    "$1::uuid",
+    transaction,
+  );
+  const changed: Array<{ id: string; spec: PartSpec }> = [];
+  const revisions: PartRevisionInsert[] = [];
+  const counts = { new: created, changed: 0, unchanged: 0 };
+  for (const row of kept) {
+    const spec = row.value as PartSpec;
+    const before = existing.get(partKey(spec.manufacturer, spec.partNumber));
+    counts[row.status] += 1;
+    if (row.status === "changed" && before) {
+      changed.push({ id: before.id, spec });
+      revisions.push({ partId: before.id, action: "intake", intakeId: intake.id, editorId: null, before: before.spec, after: spec });
+    }
+  }
+  await updateParts(changed, transaction);
+  await insertPartRevisions(revisions, transaction);
+  return counts;
 }
 
 async function commitParts(intake: IntakeSql, byUserId: string, transaction: Transaction): Promise<Comparison["counts"]> {
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "c0");
+  if (await catalogueUnchangedSince(intake, transaction)) return commitPreviewedParts(intake, transaction);
   const preview = await readStoredRows(intake, transaction);
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "read");
-  const comparison = (await catalogueUnchangedSince(intake, transaction))
-    ? await reusePartsComparison(preview, transaction)
-    : // Compared again against the catalogue as it is now: it changed since the preview.
-      await compareParts(
-        preview.map((r) => ({ row: r.row, value: r.value as PartSpec })),
-        transaction,
-      );
+  // Compared again against the catalogue as it is now: it changed since the preview.
+  const comparison = await compareParts(
+    preview.map((r) => ({ row: r.row, value: r.value as PartSpec })),
+    transaction,
+  );
   const created: Array<{ id: string; spec: PartSpec }> = [];
   const changed: Array<{ id: string; spec: PartSpec }> = [];
   const revisions: PartRevisionInsert[] = [];
@@ -476,19 +504,15 @@ async function commitParts(intake: IntakeSql, byUserId: string, transaction: Tra
       revisions.push({ partId: before.id, action: "intake", intakeId: intake.id, editorId: null, before: before.spec, after: spec });
     }
   }
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "compared");
   await insertParts(created, transaction);
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "inserted");
   await insertCreationRevisions(
     created.map((c) => c.id),
     intake.id,
     transaction,
   );
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "revs");
   await updateParts(changed, transaction);
   await insertPartRevisions(revisions, transaction);
   await refreshStoredRows(intake, preview, comparison.rows, transaction);
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "refreshed");
   return comparison.counts;
 }
 
@@ -557,9 +581,7 @@ function withoutId(offer: (Offer & { id: string }) | null): Offer | null {
 }
 
 async function commitOffers(intake: IntakeSql, transaction: Transaction): Promise<Comparison["counts"]> {
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "c0");
   const preview = await readStoredRows(intake, transaction);
-  console.log("T", Math.round(performance.now()), Math.round(process.memoryUsage().rss/1048576), Math.round(process.memoryUsage().heapUsed/1048576), "read");
   const comparison = await compareOffers(
     preview.map((r) => ({ row: r.row, value: r.value as OfferRow })),
     transaction,
