@@ -454,13 +454,15 @@ async function catalogueUnchangedSince(intake: IntakeSql, transaction: Transacti
  * the catalogue inside PostgreSQL; only the changed rows are read here, for their revisions.
  */
 async function commitPreviewedParts(intake: IntakeSql, transaction: Transaction): Promise<Comparison["counts"]> {
-  const kept = await readStoredRowsExceptNew(intake, transaction);
+  const kept = intake.changed_count + intake.unchanged_count > 0 ? await readStoredRowsExceptNew(intake, transaction) : [];
   const existing = await findExisting(
     kept.map((r) => r.value as PartSpec),
     transaction,
   );
+  // The whole array becomes jsonb once, so each column's look-up does not parse its row's text again.
   const created = await insertPartsFromEncoded(
-    `(SELECT s.stored->2 AS spec FROM ${STORED_ROWS} WHERE i.id = $1 AND s.stored->>1 = 'new' ORDER BY s.n) s`,
+    `(SELECT s.stored->2 AS spec FROM intakes i CROSS JOIN LATERAL jsonb_array_elements(i.parsed_rows::jsonb) AS s(stored)
+      WHERE i.id = $1 AND s.stored->>1 = 'new') s`,
     [intake.id],
     "$1::uuid",
     transaction,

@@ -3,8 +3,8 @@
 // Prints p99 and errors and writes tests/bench/results/catalogue-api-bench.json; asserts nothing.
 // Run: npx react-router build && npx tsx tests/bench/catalogue-api-bench.ts
 // BENCH_PROBE=1 also loads an auth-only API answer and /api/health, to show what the guard and framework cost alone.
-import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
-import { cpus, tmpdir } from "node:os";
+import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { cpus, loadavg, tmpdir } from "node:os";
 import path from "node:path";
 import autocannon from "autocannon";
 import { createMigrator, createSeeder } from "#db/migrator.ts";
@@ -34,6 +34,41 @@ class Cookies {
   header(): string {
     return [...this.values].map(([k, v]) => `${k}=${v}`).join("; ");
   }
+}
+
+/** CPU seconds used so far by this process's child processes (the app server), from /proc; null elsewhere. */
+function childCpuSeconds(): number | null {
+  try {
+    let ticks = 0;
+    for (const pid of readdirSync("/proc").filter((name) => /^\d+$/.test(name))) {
+      let stat: string;
+      try {
+        stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+      } catch {
+        continue;
+      }
+      // Fields after the parenthesised command: state, ppid, ... utime is the 12th, stime the 13th.
+      const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      if (Number(fields[1]) === process.pid) ticks += Number(fields[11]) + Number(fields[12]);
+    }
+    return ticks / 100;
+  } catch {
+    return null;
+  }
+}
+
+/** Cores used on average by the load tool (this process) and by the server while `run` ran: on 2 cores they share. */
+async function measureCpu<T>(run: () => Promise<T>): Promise<{ result: T; clientCores: number; serverCores: number | null }> {
+  const started = performance.now();
+  const client = process.cpuUsage();
+  const server = childCpuSeconds();
+  const result = await run();
+  const seconds = (performance.now() - started) / 1000;
+  const used = process.cpuUsage(client);
+  const serverAfter = childCpuSeconds();
+  const clientCores = (used.user + used.system) / 1e6 / seconds;
+  const serverCores = server === null || serverAfter === null ? null : (serverAfter - server) / seconds;
+  return { result, clientCores: Number(clientCores.toFixed(2)), serverCores: serverCores === null ? null : Number(serverCores.toFixed(2)) };
 }
 
 async function signIn(url: string, mailDir: string, email: string): Promise<string> {
@@ -79,7 +114,10 @@ async function main() {
     const probeBody = (await probe.json()) as { total: number };
     console.log(`Betasift catalogue API bench (${process.version}, ${cpus()[0]?.model ?? "unknown CPU"})`);
     console.log(`  GET ${QUERY}: ${probe.status}, ${probeBody.total} matching of ${EXTRA_PARTS + 87} parts`);
-    const result = await autocannon({ url: `${app.url}${QUERY}`, connections: CONNECTIONS, duration: DURATION_S, headers: { cookie } });
+    const loadBefore = loadavg();
+    const { result, clientCores, serverCores } = await measureCpu(() =>
+      autocannon({ url: `${app.url}${QUERY}`, connections: CONNECTIONS, duration: DURATION_S, headers: { cookie } }),
+    );
     const errors = result.errors + result.timeouts + result.non2xx;
     const results = {
       node: process.version,
@@ -95,14 +133,21 @@ async function main() {
       latencyMaxMs: result.latency.max,
       errors,
       p99GoalMs: P99_GOAL_MS,
+      cores: cpus().length,
+      clientCpuCores: clientCores,
+      serverCpuCores: serverCores,
+      loadAverageBefore: loadBefore.map((l) => Number(l.toFixed(2))),
     };
     console.log(`  ${results.requests} requests, ${results.requestsPerSecond} req/s, p50 ${results.latencyP50Ms} ms, max ${results.latencyMaxMs} ms`);
     console.log(`  p99: ${results.latencyP99Ms} ms (goal ≤ ${P99_GOAL_MS} ms: ${results.latencyP99Ms <= P99_GOAL_MS ? "met" : "MISSED"})`);
     console.log(`  errors: ${errors} (goal 0: ${errors === 0 ? "met" : "MISSED"})`);
+    console.log(`  CPU: load tool ${clientCores} cores, server ${serverCores ?? "?"} cores of ${cpus().length}; load average before ${results.loadAverageBefore.join(" ")}`);
     if (process.env.BENCH_PROBE) {
       for (const probePath of ["/api/parts/not-a-uuid", "/api/health"]) {
-        const r = await autocannon({ url: `${app.url}${probePath}`, connections: CONNECTIONS, duration: 5, headers: { cookie } });
-        console.log(`  probe ${probePath}: ${r.requests.average} req/s, p99 ${r.latency.p99} ms`);
+        const { result: r, clientCores: c, serverCores: sc } = await measureCpu(() =>
+          autocannon({ url: `${app.url}${probePath}`, connections: CONNECTIONS, duration: 5, headers: { cookie } }),
+        );
+        console.log(`  probe ${probePath}: ${r.requests.average} req/s, p99 ${r.latency.p99} ms (load tool ${c} cores, server ${sc ?? "?"} cores)`);
       }
     }
     mkdirSync(path.join(root, "tests/bench/results"), { recursive: true });
