@@ -80,8 +80,8 @@ describe("evaluatePart", () => {
     expect(evaluation.junctionC).toBeCloseTo(40 + 0.012 * 200, 9);
     expect(evaluation.excludedBy).toEqual([]);
   });
-  it("runs the switching checks and finds the logic drive short for the low-side switch", () => {
-    const evaluation = evaluatePart(SMALL, preset("low-side-switch"));
+  it("runs the switching checks and finds a 1 kΩ logic drive short for the low-side switch", () => {
+    const evaluation = evaluatePart(SMALL, parseRequirementSheet({ ...preset("low-side-switch"), drive: { kind: "source", volts: 3.3, sourceOhms: 1e3 } }));
     expect(evaluation.checks.map((check) => check.check)).toEqual(["gain", "voltage", "current", "drive", "saturation", "thermal"]);
     expect(evaluation.verdict).toBe("fails");
     expect(evaluation.flags).toContain("drive-short");

@@ -137,7 +137,7 @@ export const presets: readonly RequirementPreset[] = [
   {
     id: "low-side-switch",
     name: "LED or relay low-side switch",
-    description: "150 mA from 12 V, driven by a 3.3 V logic output through 1 kΩ, clamped coil.",
+    description: "150 mA from 12 V, driven by a 3.3 V logic output through a 150 Ω base resistor, clamped coil.",
     sheet: parseRequirementSheet({
       name: "Low-side switch",
       supplyVolts: 12,
@@ -146,7 +146,8 @@ export const presets: readonly RequirementPreset[] = [
       mode: "switching",
       dutyCycle: 1,
       ambientC: 50,
-      drive: { kind: "source", volts: 3.3, sourceOhms: 1e3 },
+      // A start that can work: 150 Ω gives a 3.3 V pin about 16 mA of base current for a forced gain of 10.
+      drive: { kind: "source", volts: 3.3, sourceOhms: 150 },
       allowedSatDropVolts: 0.4,
       polarity: "npn",
       derating: industrial,
