@@ -65,7 +65,8 @@ async function main() {
     runStep("loading the demo data where missing", bin("tsx"), ["db/cli.ts", "seed"], { cwd: root, env: serverEnv });
     runStep("building the app", bin("react-router"), ["build"], { cwd: root, env: { ...serverEnv, NODE_ENV: "production" } });
 
-    children.push(startService(bin("react-router-serve"), ["build/server/index.js"], { cwd: root, env: serverEnv, quiet: true }));
+    // One server worker per core behind one port (app/ops/serve.server.ts).
+    children.push(startService(bin("tsx"), ["app/ops/serve.server.ts", "build/server/index.js"], { cwd: root, env: serverEnv, quiet: true }));
     await waitForHttp(`http://127.0.0.1:${appPort}/api/health`, 60_000);
 
     const accounts = demoPeople.map((p) => `    ${p.email.padEnd(34)} ${p.displayName} (${p.roles.join(", ")}): ${p.does}`).join("\n");

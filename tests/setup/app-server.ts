@@ -33,13 +33,27 @@ export interface RunningApp {
 }
 
 /** Starts the production build the way npm start serves it, on a free loopback port. */
-export async function startAppServer(env: Record<string, string>, options: { waitForHealthy?: boolean } = {}): Promise<RunningApp> {
+/** `workers` > 1 serves through app/ops/serve.server.ts, the way npm start does; tests use one process. */
+export async function startAppServer(env: Record<string, string>, options: { waitForHealthy?: boolean; workers?: number } = {}): Promise<RunningApp> {
   const waitForHealthy = options.waitForHealthy ?? true;
+  const clustered = (options.workers ?? 1) > 1;
   assertBuilt();
   const port = await freePort();
-  const child: ChildProcess = spawn(path.join(root, "node_modules/.bin/react-router-serve"), ["build/server/index.js"], {
+  const [command, args] = clustered
+    ? [path.join(root, "node_modules/.bin/tsx"), ["app/ops/serve.server.ts", "build/server/index.js"]]
+    : [path.join(root, "node_modules/.bin/react-router-serve"), ["build/server/index.js"]];
+  const child: ChildProcess = spawn(command, args, {
     cwd: root,
-    env: { ...process.env, ...TEST_SECRETS, NODE_ENV: "production", COOKIE_SECURE: "false", HOST: "127.0.0.1", PORT: String(port), ...env },
+    env: {
+      ...process.env,
+      ...TEST_SECRETS,
+      NODE_ENV: "production",
+      COOKIE_SECURE: "false",
+      HOST: "127.0.0.1",
+      PORT: String(port),
+      WEB_CONCURRENCY: String(options.workers ?? 1),
+      ...env,
+    },
     stdio: ["ignore", "ignore", "pipe"],
   });
   let stderr = "";
