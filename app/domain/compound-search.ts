@@ -15,6 +15,7 @@ import {
   worstGainModel,
   screenCompound,
   findCompoundExclusions,
+  thermalInputFor,
 } from "./compound";
 import { decadesOutside, DEFAULT_GAIN_WINDOW_DECADES, DEFAULT_TYP_TO_MIN_FACTOR, prepareGain } from "./gain-curve";
 import { chooseVbe, chooseVbeInto, isOutsidePackages, planSheet, type PreparedPart, qualityOf, type SheetPlan } from "./evaluate-part";
@@ -247,21 +248,8 @@ interface ThermalBound {
 function boundOutputThermal(facts: PartFacts<PartSpec>, settings: BaseSettings): ThermalBound {
   const { sheet } = settings;
   const part = facts.part;
-  const switching = sheet.mode === "switching";
-  const thermal = judgeThermal({
-    mode: sheet.mode,
-    vceVolts: switching ? chooseVbe(part, sheet.operatingIcAmps, "linear").volts : operatingVceOf(sheet),
-    icAmps: leastOutputCurrent(sheet.operatingIcAmps, facts.minGain, settings),
-    dutyCycle: switching ? sheet.dutyCycle : 1,
-    ambientC: sheet.ambientC,
-    rthJaCPerW: part.rthJaCPerW,
-    rthJcCPerW: part.rthJcCPerW,
-    heatsinkRthCPerW: sheet.heatsinkRthCPerW,
-    tjMaxC: part.tjMaxC,
-    ptotWatts: part.ptotWatts,
-    ptotReference: part.ptotReference,
-    derating: sheet.derating,
-  });
+  const vceVolts = sheet.mode === "switching" ? chooseVbe(part, sheet.operatingIcAmps, "linear").volts : operatingVceOf(sheet);
+  const thermal = judgeThermal(thermalInputFor(part, "output", sheet, vceVolts, leastOutputCurrent(sheet.operatingIcAmps, facts.minGain, settings)));
   return { share: thermal.margin === null ? null : shareOfMargin(thermal.margin, settings.fullMargin), fails: thermal.verdict === "fails" };
 }
 

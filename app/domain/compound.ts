@@ -406,7 +406,8 @@ function foldInto(screen: { verdict: Verdict; margin: number | null; flags: numb
   screen.flags |= judged.flags;
 }
 
-function thermalInputFor(part: PartSpec, role: PairRole, sheet: RequirementSheet, vceVolts: number, icAmps: number): ThermalCheckInput {
+/** The thermal check input for one device of a pair; the search's bounds use the same one. */
+export function thermalInputFor(part: PartSpec, role: PairRole, sheet: RequirementSheet, vceVolts: number, icAmps: number): ThermalCheckInput {
   const switching = sheet.mode === "switching";
   return {
     subject: role,

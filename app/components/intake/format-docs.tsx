@@ -1,15 +1,8 @@
 // The documentation of one intake file format: every column, its unit, whether it is required, an example.
 
-export interface ColumnDocRow {
-  name: string;
-  label: string;
-  type: string;
-  unit: string;
-  required: string;
-  description: string;
-  example: string;
-  plausible: string;
-}
+import type { ColumnDoc } from "#app/domain/intake/columns.ts";
+
+export type ColumnDocRow = ColumnDoc;
 
 export function FormatTable({ kind, columns }: { kind: "parts" | "offers"; columns: readonly ColumnDocRow[] }) {
   return (
