@@ -5,9 +5,11 @@ import { defineConfig } from "vitest/config";
 // One config for the app build and for Vitest; the React Router plugin is left out under Vitest.
 const underVitest = Boolean(process.env.VITEST);
 
-export default defineConfig({
+export default defineConfig(({ isSsrBuild }) => ({
   plugins: underVitest ? [] : [tailwindcss(), reactRouter()],
   server: { host: "127.0.0.1" },
+  // The server build's entry is our HTTP layer (headers, origin check, body limits), which imports React Router's build.
+  build: isSsrBuild ? { rollupOptions: { input: "./app/ops/http-app.server.ts" } } : undefined,
   test: {
     setupFiles: ["tests/setup/console-guard.ts"],
     projects: [
@@ -54,4 +56,4 @@ export default defineConfig({
       },
     ],
   },
-});
+}));

@@ -1,6 +1,7 @@
 import { isRouteErrorResponse, Links, Meta, Outlet, Scripts, ScrollRestoration, useRouteLoaderData } from "react-router";
 import type { Route } from "./+types/root";
 import { AppHeader } from "./components/app-header";
+import { useNonce } from "./components/nonce";
 import { getOptionalUser } from "./lib/auth.server";
 import "./app.css";
 
@@ -13,6 +14,7 @@ export const links: Route.LinksFunction = () => [{ rel: "icon", href: "/favicon.
 
 export function Layout({ children }: { children: React.ReactNode }) {
   const rootData = useRouteLoaderData<typeof loader>("root");
+  const nonce = useNonce();
   return (
     <html lang="en">
       <head>
@@ -24,8 +26,8 @@ export function Layout({ children }: { children: React.ReactNode }) {
       <body className="min-h-screen font-sans antialiased">
         <AppHeader user={rootData?.user ?? null} />
         <main className="mx-auto max-w-6xl px-6 py-8">{children}</main>
-        <ScrollRestoration />
-        <Scripts />
+        <ScrollRestoration nonce={nonce} />
+        <Scripts nonce={nonce} />
       </body>
     </html>
   );

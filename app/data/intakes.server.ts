@@ -8,7 +8,7 @@ import { parseIntakeFile } from "#app/domain/intake/parse-intake.ts";
 import { countRejectedRows, hasFileError, type IntakeKind, type IntakeProblem, type IntakeRow } from "#app/domain/intake/problems.ts";
 import { partKey, type Offer, type PartSpec } from "#app/domain/part.ts";
 import { db } from "#app/lib/db.server.ts";
-import { queueIntakeReport, startJobs } from "#app/lib/jobs.server.ts";
+import { queueIntakeReport } from "#app/lib/jobs.server.ts";
 import {
   bumpCatalogueVersion,
   copyRows,
@@ -293,8 +293,6 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
 // ---- reads ------------------------------------------------------------------------------------
 
 export async function listIntakes(): Promise<IntakeView[]> {
-  // A librarian looking at intakes starts this process's queue workers, so reports queued before a restart go out.
-  void startJobs().catch((error: unknown) => console.error(`job queue did not start: ${error instanceof Error ? error.message : String(error)}`));
   const rows = await db().sequelize.query<IntakeSql>(
     `SELECT ${INTAKE_SELECT} FROM intakes i LEFT JOIN users u ON u.id = i.uploaded_by ORDER BY i.created_at DESC LIMIT 500`,
     { type: QueryTypes.SELECT },
@@ -607,7 +605,7 @@ async function commitOffers(intake: IntakeSql, transaction: Transaction): Promis
  * Applies a previewed intake in one transaction. The catalogue lock makes commits touching the same
  * parts run one after the other; each compares against the catalogue as the previous one left it.
  */
-export async function commitIntake(id: string, byUserId: string, options: { origin?: string; sendReport?: boolean } = {}): Promise<IntakeOperationResult> {
+export async function commitIntake(id: string, byUserId: string, options: { sendReport?: boolean } = {}): Promise<IntakeOperationResult> {
   const sequelize = db().sequelize;
   const result = await sequelize.transaction(async (transaction): Promise<IntakeOperationResult> => {
     await lockCatalogue(transaction);
@@ -629,7 +627,7 @@ export async function commitIntake(id: string, byUserId: string, options: { orig
     await bumpCatalogueVersion(transaction);
     return { ok: true, intake: toView((await selectIntake(id, transaction))!) };
   });
-  if (result.ok && options.sendReport !== false) await queueIntakeReport({ intakeId: id, origin: options.origin ?? null });
+  if (result.ok && options.sendReport !== false) await queueIntakeReport({ intakeId: id });
   return result;
 }
 

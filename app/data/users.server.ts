@@ -1,16 +1,9 @@
 import { Op, QueryTypes } from "sequelize";
 import { db } from "#app/lib/db.server.ts";
 import { isRole, type Role } from "#app/lib/roles.ts";
+import { PERSON_COLUMNS, sqlToPerson, type Person, type PersonSql } from "./person-row.server.ts";
 
-export interface Person {
-  id: string;
-  email: string;
-  displayName: string;
-  active: boolean;
-  roles: Role[];
-  teamName: string | null;
-  lastSignInAt: string | null;
-}
+export type { Person };
 
 type UserRow = InstanceType<ReturnType<typeof db>["User"]>;
 
@@ -36,36 +29,9 @@ export function normaliseEmail(email: string): string {
   return email.trim().toLowerCase();
 }
 
-interface PersonSql {
-  id: string;
-  email: string;
-  display_name: string;
-  active: boolean;
-  roles: string[];
-  team_name: string | null;
-  last_sign_in_at: Date | null;
-}
-
-// One statement and no model instances: this runs on every signed-in request (the person is never cached).
-const PERSON_SELECT = `SELECT u.id, u.email, u.display_name, u.active, u.last_sign_in_at, t.name AS team_name,
-  ARRAY(SELECT r.role FROM user_roles r WHERE r.user_id = u.id) AS roles
-  FROM users u LEFT JOIN teams t ON t.id = u.team_id`;
-
-function sqlToPerson(row: PersonSql): Person {
-  return {
-    id: row.id,
-    email: row.email,
-    displayName: row.display_name,
-    active: row.active,
-    roles: row.roles.filter(isRole).sort(),
-    teamName: row.team_name,
-    lastSignInAt: row.last_sign_in_at ? new Date(row.last_sign_in_at).toISOString() : null,
-  };
-}
-
 // An escaped replacement, not a bind parameter: one simple-protocol message instead of five socket writes per request.
 async function selectPerson(where: string, value: string): Promise<Person | null> {
-  const [row] = await db().sequelize.query<PersonSql>(`${PERSON_SELECT} WHERE ${where} = :value`, { replacements: { value }, type: QueryTypes.SELECT, raw: true });
+  const [row] = await db().sequelize.query<PersonSql>(`SELECT ${PERSON_COLUMNS} FROM users u LEFT JOIN teams t ON t.id = u.team_id WHERE ${where} = :value`, { replacements: { value }, type: QueryTypes.SELECT, raw: true });
   return row ? sqlToPerson(row) : null;
 }
 
@@ -114,8 +80,13 @@ export async function setRoles(id: string, roles: Role[]): Promise<void> {
   });
 }
 
+/** Deactivation ends the person's sessions in the same transaction, so reactivation revives none of them. */
 export async function setActive(id: string, active: boolean): Promise<void> {
-  await db().User.update({ active, deactivatedAt: active ? null : new Date() }, { where: { id } });
+  const { sequelize, User } = db();
+  await sequelize.transaction(async (transaction) => {
+    await User.update({ active, deactivatedAt: active ? null : new Date() }, { where: { id }, transaction });
+    if (!active) await sequelize.query(`DELETE FROM sessions WHERE user_id = :id`, { replacements: { id }, transaction });
+  });
 }
 
 /** How many active admins remain besides this person: the last one may not lose the role. */

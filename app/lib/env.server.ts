@@ -22,6 +22,21 @@ const EnvSchema = z
     MAIL_INBOX_URL: z.string().optional(),
     /** Secure cookies: on outside development unless explicitly turned off for plain-HTTP loopback serving. */
     COOKIE_SECURE: z.enum(["true", "false"]).optional(),
+    /** Where people reach Betasift: every absolute link (e-mails) and the origin check use this, never the request's Host. */
+    PUBLIC_ORIGIN: z
+      .url({ protocol: /^https?$/, error: "must be an http or https origin such as https://betasift.example.com" })
+      .default("http://127.0.0.1:3000")
+      .transform((value) => new URL(value).origin),
+    /** Proxies in front of the app whose X-Forwarded-For is believed: a hop count, or false (the socket's address). */
+    TRUST_PROXY: z
+      .string()
+      .regex(/^(false|\d{1,2})$/, "must be false or a number of proxy hops")
+      .default("false")
+      .transform((value) => (value === "false" ? 0 : Number(value))),
+    /** Codes one address may ask for, and one client address may ask for, per window. */
+    SIGN_IN_CODES_PER_ADDRESS: z.coerce.number().int().min(1).max(100_000).default(5),
+    SIGN_IN_CODES_PER_CLIENT: z.coerce.number().int().min(1).max(100_000).default(30),
+    SIGN_IN_CODE_WINDOW_SECONDS: z.coerce.number().int().min(1).max(86_400).default(900),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV !== "production") return;

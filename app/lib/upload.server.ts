@@ -7,9 +7,31 @@ export type UploadRead =
   | { ok: true; form: FormData }
   | { ok: false; status: 400 | 413; code: "bad-request" | "too-large"; message: string };
 
-function tooLarge(limitBytes: number): UploadRead {
+/** Past this much of a refused body, the connection is closed instead of drained. */
+const DRAIN_LIMIT_BYTES = 64 * 1024 * 1024;
+
+export function tooLargeMessage(limitBytes: number): string {
   const mb = (limitBytes / (1024 * 1024)).toFixed(0);
-  return { ok: false, status: 413, code: "too-large", message: `The file is larger than the ${mb} MB an intake accepts. Split it into smaller files.` };
+  return `The file is larger than the ${mb} MB an intake accepts. Split it into smaller files.`;
+}
+
+function tooLarge(limitBytes: number): UploadRead {
+  return { ok: false, status: 413, code: "too-large", message: tooLargeMessage(limitBytes) };
+}
+
+// Reading the rest and throwing it away lets the client finish sending and read the answer; cancelling the
+// stream would reset the connection under it.
+async function drain(reader: ReadableStreamDefaultReader<Uint8Array>, alreadyRead: number): Promise<void> {
+  let total = alreadyRead;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) return;
+    total += value.byteLength;
+    if (total > DRAIN_LIMIT_BYTES) {
+      await reader.cancel().catch(() => undefined);
+      return;
+    }
+  }
 }
 
 /**
@@ -37,7 +59,8 @@ export async function readMultipartUpload(request: Request, fileLimitBytes: numb
       if (done) break;
       total += value.byteLength;
       if (total > bodyLimit) {
-        await reader.cancel().catch(() => undefined);
+        chunks.length = 0;
+        await drain(reader, total).catch(() => undefined);
         return tooLarge(fileLimitBytes);
       }
       chunks.push(value);

@@ -5,12 +5,11 @@ import { availableParallelism } from "node:os";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 
-// The package exports no subpath for its command, so the workers run it from the installed folder.
-const serveCommand = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../../node_modules/@react-router/serve/bin.js");
+const workerScript = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "http-worker.server.ts");
 const workers = Number(process.env.WEB_CONCURRENCY ?? availableParallelism());
 let stopping = false;
 
-cluster.setupPrimary({ exec: serveCommand, args: process.argv.slice(2) });
+cluster.setupPrimary({ exec: workerScript, args: process.argv.slice(2) });
 for (let i = 0; i < workers; i += 1) cluster.fork();
 
 cluster.on("exit", (worker, code) => {

@@ -2,9 +2,11 @@
 import * as teamsUsersRoles from "./0001-teams-users-roles.ts";
 import * as signInFailures from "./0002-sign-in-failures.ts";
 import * as catalogueAndIntakes from "./0003-catalogue-and-intakes.ts";
+import * as serverSessions from "./0004-server-sessions-and-challenges.ts";
 
 export const migrations = [
   { name: "0001-teams-users-roles", ...teamsUsersRoles },
   { name: "0002-sign-in-failures", ...signInFailures },
   { name: "0003-catalogue-and-intakes", ...catalogueAndIntakes },
+  { name: "0004-server-sessions-and-challenges", ...serverSessions },
 ];

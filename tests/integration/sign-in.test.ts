@@ -3,6 +3,7 @@ import { startAppServer, type RunningApp } from "../setup/app-server.ts";
 import { connect } from "../setup/databases.ts";
 import { readMails, waitForMail } from "../setup/mail-catcher.ts";
 import { newAgent, pathOf, requestCode, signIn } from "../setup/http.ts";
+import { waitForSignInQueueIdle } from "../setup/sign-in-mail.ts";
 
 const ENGINEER = "engineer@larkfield.example.com";
 
@@ -83,7 +84,7 @@ describe("sign-in with an e-mailed code", () => {
     const page = await agent.get("/sign-in/verify");
     expect(page.text).toContain(`If <strong>${unknownAddress}</strong> has a Betasift account`);
     await waitForMail(mailDir, ENGINEER, since);
-    await new Promise((resolve) => setTimeout(resolve, 1000));
+    await waitForSignInQueueIdle(inject("databaseUrl"));
     expect(mailsTo(ENGINEER)).toBe(knownBefore + 1);
     expect(mailsTo(unknownAddress)).toBe(0);
     const guess = await agent.post("/sign-in/verify").type("form").send({ intent: "verify", code: "123456" });
@@ -184,7 +185,7 @@ describe("deactivated people", () => {
     const before = mailsToPerson();
     const again = await newAgent().post("/sign-in").type("form").send({ email });
     expect(again.headers.location).toBe("/sign-in/verify");
-    await new Promise((resolve) => setTimeout(resolve, 800));
+    await waitForSignInQueueIdle(inject("databaseUrl"));
     expect(mailsToPerson()).toBe(before);
   });
 });

@@ -32,23 +32,28 @@ export interface RunningApp {
   stop: () => Promise<void>;
 }
 
-/** Starts the production build the way npm start serves it, on a free loopback port. */
-/** `workers` > 1 serves through app/ops/serve.server.ts, the way npm start does; tests use one process. */
+/**
+ * Starts the production build the way npm start serves it, on a free loopback port. `workers` > 1 serves through
+ * app/ops/serve.server.ts (node:cluster), the way npm start does; tests use one process. Sign-in code limits are
+ * lifted unless `env` sets them, because the whole suite asks for codes from one loopback address.
+ */
 export async function startAppServer(env: Record<string, string>, options: { waitForHealthy?: boolean; workers?: number } = {}): Promise<RunningApp> {
   const waitForHealthy = options.waitForHealthy ?? true;
   const clustered = (options.workers ?? 1) > 1;
   assertBuilt();
   const port = await freePort();
-  const [command, args] = clustered
-    ? [path.join(root, "node_modules/.bin/tsx"), ["app/ops/serve.server.ts", "build/server/index.js"]]
-    : [path.join(root, "node_modules/.bin/react-router-serve"), ["build/server/index.js"]];
-  const child: ChildProcess = spawn(command, args, {
+  const script = clustered ? "app/ops/serve.server.ts" : "app/ops/http-worker.server.ts";
+  const url = `http://127.0.0.1:${port}`;
+  const child: ChildProcess = spawn(path.join(root, "node_modules/.bin/tsx"), [script, "build/server/index.js"], {
     cwd: root,
     env: {
       ...process.env,
       ...TEST_SECRETS,
       NODE_ENV: "production",
       COOKIE_SECURE: "false",
+      PUBLIC_ORIGIN: url,
+      SIGN_IN_CODES_PER_ADDRESS: "100000",
+      SIGN_IN_CODES_PER_CLIENT: "100000",
       HOST: "127.0.0.1",
       PORT: String(port),
       WEB_CONCURRENCY: String(options.workers ?? 1),
@@ -58,7 +63,6 @@ export async function startAppServer(env: Record<string, string>, options: { wai
   });
   let stderr = "";
   child.stderr?.on("data", (chunk: Buffer) => (stderr += chunk.toString()));
-  const url = `http://127.0.0.1:${port}`;
   const deadline = Date.now() + 30_000;
   for (;;) {
     if (child.exitCode !== null) throw new Error(`the app server exited: ${stderr}`);

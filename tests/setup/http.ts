@@ -1,6 +1,7 @@
 import request from "supertest";
 import { inject } from "vitest";
-import { magicLinkFrom, signInCodeFrom, waitForMail } from "./mail-catcher.ts";
+import { magicLinkFrom, signInCodeFrom } from "./mail-catcher.ts";
+import { mailCausedBy } from "./sign-in-mail.ts";
 
 export type Agent = ReturnType<typeof request.agent>;
 
@@ -8,17 +9,19 @@ export function appUrl(): string {
   return inject("appUrl");
 }
 
+/** A client like a browser on a page of the app: it sends the app's Origin on every request, as browsers do. */
 export function newAgent(url = appUrl()): Agent {
-  return request.agent(url);
+  return request.agent(url).set("Origin", url);
 }
 
 /** Asks for a code through the sign-in form and returns the e-mailed code and link. */
 export async function requestCode(agent: Agent, email: string, mailDir = inject("mailDir")) {
-  const since = Date.now();
-  const response = await agent.post("/sign-in").type("form").send({ email });
-  if (response.status !== 302) throw new Error(`sign-in answered ${response.status}`);
-  const mail = await waitForMail(mailDir, email, since);
-  return { code: signInCodeFrom(mail), link: magicLinkFrom(mail), mail };
+  const { result: response, mail } = await mailCausedBy({ mailDir, databaseUrl: inject("databaseUrl"), to: email }, async () => {
+    const answer = await agent.post("/sign-in").type("form").send({ email });
+    if (answer.status !== 302) throw new Error(`sign-in answered ${answer.status}: ${answer.text.slice(0, 200)}`);
+    return answer;
+  });
+  return { code: signInCodeFrom(mail), link: magicLinkFrom(mail), mail, response };
 }
 
 /** The whole sign-in as a person does it: address, e-mailed code, verify. */

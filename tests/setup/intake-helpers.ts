@@ -136,7 +136,7 @@ export async function fingerprintCatalogue(sequelize: Sequelize): Promise<TableF
 }
 
 /** Waits for the intake report e-mail about one file that arrived after `since`. */
-export async function waitForIntakeReport(mailDir: string, fileName: string, since: number, timeoutMs = 15_000): Promise<CaughtMail> {
+export async function waitForIntakeReport(mailDir: string, fileName: string, since: number, timeoutMs = 30_000): Promise<CaughtMail> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const found = readMails(mailDir).find((m) => m.receivedAt >= since && m.to.includes(LIBRARIAN) && m.subject === `Betasift intake committed: ${fileName}`);

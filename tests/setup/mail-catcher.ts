@@ -45,7 +45,7 @@ export function readMails(directory: string): CaughtMail[] {
 }
 
 /** Waits for a mail to `to` that arrived after `since` (ms epoch). */
-export async function waitForMail(directory: string, to: string, since: number, timeoutMs = 10_000): Promise<CaughtMail> {
+export async function waitForMail(directory: string, to: string, since: number, timeoutMs = 30_000): Promise<CaughtMail> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const found = readMails(directory).filter((m) => m.to.includes(to.toLowerCase()) && m.receivedAt >= since).at(-1);

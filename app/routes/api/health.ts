@@ -1,3 +1,4 @@
+import { methodNotAllowed } from "#app/lib/api.server.ts";
 import { databaseAnswers } from "#app/lib/db.server.ts";
 import { mailAnswers } from "#app/lib/mail.server.ts";
 
@@ -10,3 +11,5 @@ export async function loader() {
     { status: ok ? 200 : 503, headers: { "Cache-Control": "no-store" } },
   );
 }
+
+export const action = methodNotAllowed(["GET"]);

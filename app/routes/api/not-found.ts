@@ -1,8 +1,9 @@
 import type { Route } from "./+types/not-found";
+import { apiError } from "#app/lib/api.server.ts";
 
 function notFound(request: Request) {
   const { pathname } = new URL(request.url);
-  return Response.json({ error: { code: "not-found", message: `No API route at ${pathname}.`, details: null } }, { status: 404 });
+  return apiError(404, "not-found", `No API route at ${pathname}.`);
 }
 
 export function loader({ request }: Route.LoaderArgs) {

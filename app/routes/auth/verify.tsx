@@ -2,9 +2,22 @@ import { data, Form, redirect } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/verify";
 import { Button, Notice, TextField } from "#app/components/ui/field.tsx";
-import { authenticateWithCode, getOptionalUser, readCodeState } from "#app/lib/auth.server.ts";
+import { databaseUnavailableResponse, getOptionalUser } from "#app/lib/auth.server.ts";
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "#app/lib/db.server.ts";
 import { env } from "#app/lib/env.server.ts";
 import { parseForm } from "#app/lib/forms.ts";
+import { clientAddressOf } from "#app/lib/load-context.ts";
+import { answerVerification } from "#app/lib/sign-in-outcome.server.ts";
+import {
+  challengeIsOpen,
+  clearChallengeCookie,
+  currentChallenge,
+  sendSignInCode,
+  SIGN_IN_MESSAGES,
+  SIGN_IN_PATH,
+  VERIFY_PATH,
+  verifySignIn,
+} from "#app/lib/sign-in.server.ts";
 
 const VerifySchema = z.discriminatedUnion("intent", [
   z.object({
@@ -21,21 +34,52 @@ const VerifySchema = z.discriminatedUnion("intent", [
 
 export async function loader({ request }: Route.LoaderArgs) {
   if (await getOptionalUser(request)) throw redirect("/");
-  const state = readCodeState(request);
-  if (!state.email) throw redirect("/sign-in");
-  return { email: state.email, canVerify: state.hasCode, error: state.error, mailInboxUrl: env().MAIL_INBOX_URL ?? null };
+  const current = await currentChallenge(request).catch((error: unknown) => {
+    if (isDatabaseUnavailable(error)) throw databaseUnavailableResponse(request);
+    throw error;
+  });
+  if (!current) throw redirect(SIGN_IN_PATH, { headers: { "Set-Cookie": await clearChallengeCookie() } });
+  const { challenge } = current;
+  return {
+    email: challenge.email,
+    canVerify: challengeIsOpen(challenge),
+    error: challenge.lastError ? SIGN_IN_MESSAGES[challenge.lastError] : null,
+    mailInboxUrl: env().MAIL_INBOX_URL ?? null,
+  };
 }
 
-export async function action({ request }: Route.ActionArgs) {
+async function resend(request: Request, clientAddress: string) {
+  const current = await currentChallenge(request);
+  if (!current) return redirect(SIGN_IN_PATH);
+  const sent = await sendSignInCode({ email: current.challenge.email, redirectTo: current.challenge.redirectTo, clientAddress });
+  if (!sent.ok) {
+    return data({ fieldErrors: { form: sent.message }, values: {} as Record<string, string> }, { status: sent.status, headers: { "Retry-After": String(sent.retryAfterSeconds) } });
+  }
+  return redirect(VERIFY_PATH, { headers: { "Set-Cookie": sent.setCookie } });
+}
+
+export async function action({ request, context }: Route.ActionArgs) {
   const form = await parseForm(request, VerifySchema);
   if (!form.ok) return data({ fieldErrors: form.fieldErrors, values: form.values }, { status: 400 });
-  return authenticateWithCode(request);
+  try {
+    if (form.data.intent === "resend") return await resend(request, clientAddressOf(context));
+    return await answerVerification(request, await verifySignIn(request, form.data.code));
+  } catch (error) {
+    if (!isDatabaseUnavailable(error)) throw error;
+    return data({ fieldErrors: { form: DATABASE_UNAVAILABLE_MESSAGE }, values: form.values }, { status: 503 });
+  }
 }
+
+// Retry-After on a refused code request reaches the browser with the page.
+export const headers: Route.HeadersFunction = ({ actionHeaders }) => {
+  const retryAfter = actionHeaders.get("Retry-After");
+  return retryAfter ? { "Retry-After": retryAfter } : new Headers();
+};
 
 export const meta: Route.MetaFunction = () => [{ title: "Enter your code · Betasift" }];
 
 export default function Verify({ loaderData, actionData }: Route.ComponentProps) {
-  const errors = actionData?.fieldErrors;
+  const errors = actionData?.fieldErrors as Record<string, string> | undefined;
   return (
     <section className="mx-auto max-w-md">
       <h1 className="text-2xl font-semibold">Enter your code</h1>

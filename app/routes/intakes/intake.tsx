@@ -41,10 +41,9 @@ export async function action({ request, params }: Route.ActionArgs) {
   const id = intakeIdOf(params);
   const form = await parseForm(request, OperationSchema);
   if (!form.ok) return data({ error: form.fieldErrors.intent ?? form.fieldErrors.form ?? "Send the form again." }, { status: 400 });
-  const origin = new URL(request.url).origin;
   const result =
     form.data.intent === "commit"
-      ? await commitIntake(id, user.id, { origin })
+      ? await commitIntake(id, user.id)
       : form.data.intent === "discard"
         ? await discardIntake(id, user.id)
         : await rollbackIntake(id, user.id);

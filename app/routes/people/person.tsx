@@ -4,7 +4,8 @@ import type { Route } from "./+types/person";
 import { Button, Notice } from "#app/components/ui/field.tsx";
 import { RoleCheckboxes } from "#app/components/role-checkboxes.tsx";
 import { countOtherActiveAdmins, findPersonById, setActive, setRoles } from "#app/data/users.server.ts";
-import { requireRole } from "#app/lib/auth.server.ts";
+import { countSessionsOf } from "#app/data/sessions.server.ts";
+import { requireRole, signOutEverywhere } from "#app/lib/auth.server.ts";
 import { formError, manyOf, parseForm } from "#app/lib/forms.ts";
 import { ROLES } from "#app/lib/roles.ts";
 
@@ -14,6 +15,7 @@ const PersonFormSchema = z.discriminatedUnion("intent", [
   z.object({ intent: z.literal("roles"), roles: manyOf(z.enum(ROLES, { error: "Unknown role." })) }),
   z.object({ intent: z.literal("deactivate") }),
   z.object({ intent: z.literal("reactivate") }),
+  z.object({ intent: z.literal("sign-out-everywhere") }),
 ]);
 
 async function loadPerson(params: Route.LoaderArgs["params"]) {
@@ -25,7 +27,8 @@ async function loadPerson(params: Route.LoaderArgs["params"]) {
 
 export async function loader({ request, params }: Route.LoaderArgs) {
   const admin = await requireRole(request, "admin");
-  return { person: await loadPerson(params), isSelf: admin.id === params.personId };
+  const person = await loadPerson(params);
+  return { person, isSelf: admin.id === params.personId, openSessions: await countSessionsOf(person.id) };
 }
 
 export async function action({ request, params }: Route.ActionArgs) {
@@ -52,6 +55,11 @@ export async function action({ request, params }: Route.ActionArgs) {
     case "reactivate":
       await setActive(person.id, true);
       return { fieldErrors: null, notice: `${person.displayName} can sign in again.` };
+    case "sign-out-everywhere": {
+      const ended = await signOutEverywhere(person.id);
+      const sessions = ended === 1 ? "1 session" : `${ended} sessions`;
+      return { fieldErrors: null, notice: `${person.displayName} is signed out everywhere (${sessions} ended).` };
+    }
   }
 }
 
@@ -81,10 +89,21 @@ export default function PersonPage({ loaderData, actionData }: Route.ComponentPr
         <Button type="submit">Save roles</Button>
       </Form>
       <Form method="post" className="mt-10 border-t border-rule pt-6">
+        <input type="hidden" name="intent" value="sign-out-everywhere" />
+        <p className="text-sm text-ink/80">
+          {loaderData.openSessions === 0
+            ? "No open sessions."
+            : `${loaderData.openSessions === 1 ? "1 open session" : `${loaderData.openSessions} open sessions`}. Ending them signs ${loaderData.isSelf ? "you" : "this person"} out on every device at once${loaderData.isSelf ? ", this one included" : ""}.`}
+        </p>
+        <button type="submit" disabled={loaderData.openSessions === 0} className="mt-3 rounded border border-rule px-4 py-2 hover:bg-paper disabled:opacity-60">
+          Sign out everywhere
+        </button>
+      </Form>
+      <Form method="post" className="mt-10 border-t border-rule pt-6">
         {person.active ? (
           <>
             <input type="hidden" name="intent" value="deactivate" />
-            <p className="text-sm text-ink/80">A deactivated person cannot sign in, and their open sessions stop working on their next request.</p>
+            <p className="text-sm text-ink/80">A deactivated person cannot sign in, and their open sessions end at once.</p>
             <button type="submit" className="mt-3 rounded border border-fault px-4 py-2 text-fault hover:bg-fault-soft">
               Deactivate
             </button>
