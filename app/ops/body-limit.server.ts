@@ -25,7 +25,8 @@ function drainThenClose(req: Request): void {
 
 function refuse(req: Request, res: Response, status: 411 | 413, code: string, message: string, details: unknown): void {
   drainThenClose(req);
-  res.status(status).set({ Connection: "close", "Cache-Control": "no-store" });
+  // No "Connection: close": Node would close the socket under a client still sending, which then sees a reset.
+  res.status(status).set({ "Cache-Control": "no-store" });
   if (req.path.startsWith("/api/")) {
     res.json({ error: { code, message, details } });
   } else {

@@ -18,7 +18,7 @@ export function foreignOriginProblem(method: string, origin: string | undefined,
   if (!origin || origin === "null") {
     return `This request did not say which page sent it, so Betasift refused it. Send it from ${expected}, or from a script with an API token.`;
   }
-  return `This request came from ${origin}, not from Betasift at ${expected}, so it was refused. Open Betasift at ${expected} and try again.`;
+  return `This request came from ${origin}, not from Betasift at ${expected}, so Betasift refused it. Open Betasift at ${expected} and try again.`;
 }
 
 export function refuseForeignOrigin(req: Request, res: Response, next: NextFunction): void {

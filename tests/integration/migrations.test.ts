@@ -29,7 +29,8 @@ describe("migrations", () => {
 
     await migrator.up();
     const afterUp = await tables(sequelize);
-    expect(afterUp).toEqual(expect.arrayContaining(["users", "user_roles", "teams", "sign_in_failures"]));
+    expect(afterUp).toEqual(expect.arrayContaining(["users", "user_roles", "teams", "sessions", "sign_in_challenges", "rate_limits"]));
+    expect(afterUp).not.toContain("sign_in_failures");
     expect(await migrator.pending()).toEqual([]);
 
     await migrator.down({ to: 0 });
