@@ -10,7 +10,7 @@ import helmet from "helmet";
 import { env } from "#app/lib/env.server.ts";
 import { startJobWorkers, stopJobs } from "#app/lib/jobs.server.ts";
 import { closeSequelize } from "#db/sequelize.ts";
-import { refuseForeignOrigin } from "./origin-check.server.ts";
+import { redirectLoopbackAlias, refuseForeignOrigin } from "./origin-check.server.ts";
 import { refuseOversizedBody } from "./body-limit.server.ts";
 
 export interface HttpAppOptions {
@@ -58,6 +58,7 @@ export function createHttpApp(options: HttpAppOptions): express.Express {
     next();
   });
   app.use(contentSecurityPolicy());
+  app.use(redirectLoopbackAlias);
   app.use(compression());
   app.use("/assets", express.static(path.join(options.clientDir, "assets"), { immutable: true, maxAge: "1y" }));
   app.use(express.static(options.clientDir, { maxAge: "1h" }));

@@ -31,3 +31,19 @@ export function refuseForeignOrigin(req: Request, res: Response, next: NextFunct
     res.type("text/plain").send(problem);
   }
 }
+
+const LOOPBACK_HOSTS = new Set(["localhost", "127.0.0.1", "[::1]"]);
+
+/**
+ * A person who opens the demo as http://localhost:3000 while it is configured as http://127.0.0.1:3000 would have
+ * every form refused; pages read that way are sent to the configured origin instead. Only loopback names are
+ * redirected, so a proxy in front of a real installation is never second-guessed.
+ */
+export function redirectLoopbackAlias(req: Request, res: Response, next: NextFunction): void {
+  if (req.method !== "GET" && req.method !== "HEAD") return next();
+  const configured = new URL(env().PUBLIC_ORIGIN);
+  const asked = req.get("host") ?? "";
+  const askedName = asked.replace(/:\d+$/, "");
+  if (!LOOPBACK_HOSTS.has(configured.hostname) || !LOOPBACK_HOSTS.has(askedName) || asked === configured.host) return next();
+  res.redirect(302, new URL(req.originalUrl, configured).toString());
+}

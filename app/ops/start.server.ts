@@ -50,6 +50,7 @@ async function main() {
       MAIL_INBOX_URL: inboxUrl,
       HOST: "127.0.0.1",
       PORT: String(appPort),
+      PUBLIC_ORIGIN: process.env.PUBLIC_ORIGIN ?? `http://127.0.0.1:${appPort}`,
     };
     const bin = (name: string) => path.join(root, "node_modules", ".bin", name);
 

@@ -84,13 +84,13 @@ async function measureCpu<T>(run: () => Promise<T>): Promise<{ result: T; client
 async function signIn(url: string, mailDir: string, email: string): Promise<string> {
   const cookies = new Cookies();
   const since = Date.now();
-  const asked = await fetch(`${url}/sign-in`, { method: "POST", body: new URLSearchParams({ email }), redirect: "manual" });
+  const asked = await fetch(`${url}/sign-in`, { method: "POST", body: new URLSearchParams({ email }), headers: { origin: url }, redirect: "manual" });
   cookies.take(asked);
   const code = signInCodeFrom(await waitForMail(mailDir, email, since));
   const verified = await fetch(`${url}/sign-in/verify`, {
     method: "POST",
     body: new URLSearchParams({ intent: "verify", code }),
-    headers: { cookie: cookies.header() },
+    headers: { cookie: cookies.header(), origin: url },
     redirect: "manual",
   });
   cookies.take(verified);

@@ -86,6 +86,15 @@ describe("state-changing requests from other sites", () => {
     expect(roles).toEqual([{ role: "engineer" }]);
   });
 
+  it("sends a page read through another loopback name to the configured origin, where its forms work", async () => {
+    const port = new URL(appUrl()).port;
+    const viaAlias = await request(appUrl()).get("/catalogue?sort=vceo").set("Host", `localhost:${port}`);
+    expect(viaAlias.status).toBe(302);
+    expect(viaAlias.headers.location).toBe(`${appUrl()}/catalogue?sort=vceo`);
+    const foreignHost = await request(appUrl()).get("/sign-in").set("Host", "betasift.example.com");
+    expect(foreignHost.status).toBe(200);
+  });
+
   it("lets a request with a bearer token through the origin check, where the token alone decides", async () => {
     const answer = await request(appUrl()).post("/api/intakes").set("Authorization", "Bearer not-a-real-token").field("kind", "parts");
     expect(answer.status).toBe(401);
