@@ -42,7 +42,8 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
   let detail = "The server could not finish this request. Try again; if it keeps happening, tell your admin.";
   let stack: string | undefined;
   if (isRouteErrorResponse(error)) {
-    title = error.status === 404 ? "Page not found" : error.status === 403 ? "Not allowed" : `Error ${error.status}`;
+    title =
+      error.status === 404 ? "Page not found" : error.status === 403 ? "Not allowed" : error.status === 503 ? "Betasift is out of reach for a moment" : `Error ${error.status}`;
     detail = typeof error.data === "string" && error.data ? error.data : error.statusText || detail;
   } else if (import.meta.env.DEV && error instanceof Error) {
     detail = error.message;
