@@ -5,10 +5,12 @@
 #   ./docker-free-pg.sh status   say whether it runs
 #   ./docker-free-pg.sh url [dev|test]   print the connection URL
 # Environment: BETASIFT_PG_PORT (default 55432), BETASIFT_PG_DIR (cluster folder; default .pgdata here).
+# When the default port is taken by another checkout's cluster, `up` takes the next free one and remembers it
+# in the cluster folder, so `url` and `status` keep naming the port this checkout's cluster really uses.
 set -euo pipefail
 
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
-port="${BETASIFT_PG_PORT:-55432}"
+default_port=55432
 app_role="betasift"
 app_password="betasift"
 dev_db="betasift_dev"
@@ -59,6 +61,18 @@ choose_data_dir() {
 data_dir="$(choose_data_dir)"
 cluster="$data_dir/cluster"
 socket_dir="$data_dir/socket"
+port_file="$data_dir/port"
+
+# The port: an explicit BETASIFT_PG_PORT, else the one this cluster last started on, else the default.
+if [ -n "${BETASIFT_PG_PORT:-}" ]; then
+  port="$BETASIFT_PG_PORT"
+elif [ -f "$port_file" ]; then
+  port="$(cat "$port_file")"
+else
+  port="$default_port"
+fi
+
+port_is_taken() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
 pg() { "$(pg_bin_dir)/$1" "${@:2}"; }
 
@@ -77,7 +91,6 @@ init_cluster() {
     --encoding=UTF8 --locale=C.UTF-8 >/dev/null
   cat >> "$cluster/postgresql.conf" <<CONF
 listen_addresses = '127.0.0.1'
-port = $port
 unix_socket_directories = '$socket_dir'
 fsync = off
 synchronous_commit = off
@@ -127,8 +140,19 @@ cmd_up() {
   init_cluster
   if ! is_running; then
     clear_stale_pid
+    port="${BETASIFT_PG_PORT:-$default_port}"
+    if [ -z "${BETASIFT_PG_PORT:-}" ] && port_is_taken "$port"; then
+      local wanted="$port"
+      port=$((default_port + 1))
+      while port_is_taken "$port"; do
+        port=$((port + 1))
+        [ "$port" -le $((default_port + 200)) ] || { log "no free port from $default_port on"; exit 1; }
+      done
+      log "127.0.0.1:$wanted is taken (another checkout's cluster?); using $port"
+    fi
     log "starting PostgreSQL on 127.0.0.1:$port"
-    as_owner "$(pg_bin_dir)/pg_ctl" -D "$cluster" -l "$data_dir/server.log" -w -t 60 start >/dev/null
+    as_owner "$(pg_bin_dir)/pg_ctl" -D "$cluster" -l "$data_dir/server.log" -o "-p $port" -w -t 60 start >/dev/null
+    printf '%s\n' "$port" > "$port_file"
   fi
   wait_until_ready
   ensure_role_and_databases

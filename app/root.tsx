@@ -21,7 +21,8 @@ export function Layout({ children }: { children: React.ReactNode }) {
         <meta charSet="utf-8" />
         <meta name="viewport" content="width=device-width, initial-scale=1" />
         <Meta />
-        <Links />
+        {/* Stylesheets need no nonce (style-src 'self'); an empty one renders the same on server and client. */}
+        <Links nonce="" />
       </head>
       <body className="min-h-screen font-sans antialiased">
         <AppHeader user={rootData?.user ?? null} />

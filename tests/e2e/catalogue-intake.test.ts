@@ -5,7 +5,7 @@ import path from "node:path";
 import { afterAll, beforeAll, expect, inject, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { artifactPath, launchBrowser } from "../setup/browser.ts";
-import { signInCodeFrom, waitForMail } from "../setup/mail-catcher.ts";
+import { loginAs } from "../setup/browser-login.ts";
 
 const MESSY_FILE = path.resolve(import.meta.dirname, "../../fixtures/demo/parts-messy.csv");
 const LIBRARIAN = "librarian@larkfield.example.com";
@@ -23,15 +23,8 @@ afterAll(async () => {
 const GOOD_FILE = path.resolve(import.meta.dirname, "../../fixtures/intake/good/parts-three-gain-points.csv");
 
 async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(`${inject("appUrl")}/sign-in`);
-  const since = Date.now();
-  await page.getByLabel("E-mail address").fill(email);
-  await page.getByRole("button", { name: "Send me a code" }).click();
-  await page.waitForURL("**/sign-in/verify");
-  const code = signInCodeFrom(await waitForMail(inject("mailDir"), email, since));
-  await page.getByLabel("Code").fill(code);
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((url) => url.pathname === "/");
+  await loginAs(page, email);
+  await page.goto(`${inject("appUrl")}/`);
 }
 
 it("a librarian drops a messy parts file, reads its problems, commits it, finds a new part with its plot, and is refused a rollback a later intake blocks", async () => {
@@ -49,10 +42,10 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   await page.goto(`${inject("appUrl")}/intakes/new`);
   const input = page.getByTestId("drop-zone-input");
   await input.waitFor({ state: "attached" });
-  await page.screenshot({ path: artifactPath("intake-new.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-new.png"), fullPage: true, caret: "initial" });
   await input.setInputFiles(MESSY_FILE);
   await expect.poll(() => page.getByTestId("chosen-file").textContent()).toContain("parts-messy.csv");
-  await page.screenshot({ path: artifactPath("intake-chosen.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-chosen.png"), fullPage: true, caret: "initial" });
 
   // Record every value the progress bar shows, so the test needs no timing.
   await page.evaluate(() => {
@@ -77,12 +70,12 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   await expect.poll(() => partNumberRow.locator("td").first().textContent()).toBe("11");
   expect(await page.locator('[data-count="rejected"] dd').textContent()).toBe("4");
   expect(Number(await page.locator('[data-count="new"] dd').textContent())).toBeGreaterThanOrEqual(12);
-  await page.screenshot({ path: artifactPath("intake-preview.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-preview.png"), fullPage: true, caret: "initial" });
 
   await page.getByRole("button", { name: /^Commit \d+ parts$/ }).click();
   await expect.poll(() => page.getByRole("status").first().textContent()).toContain("Committed");
   await expect.poll(() => page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
-  await page.screenshot({ path: artifactPath("intake-committed.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-committed.png"), fullPage: true, caret: "initial" });
   const intakeUrl = page.url();
 
   // The catalogue finds the committed part by search; the view lives in the URL.
@@ -94,7 +87,7 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   await expect.poll(() => table.locator("tbody tr").count()).toBe(1);
   expect(await table.locator("tbody tr").first().textContent()).toContain("Ostrevik Semiconductor");
   expect(await page.getByTestId("result-count").first().textContent()).toBe("1–1 of 1 part");
-  await page.screenshot({ path: artifactPath("catalogue-search.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("catalogue-search.png"), fullPage: true, caret: "initial" });
 
   await table.getByRole("link", { name: "OSK4460N" }).click();
   await page.waitForURL(/\/catalogue\/[0-9a-f-]{36}$/);
@@ -105,7 +98,7 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   expect(await plot.locator('g[data-series="typ"] circle').count()).toBe(2);
   // The revision history names the intake that brought the part in.
   expect(await page.getByTestId("revisions").textContent()).toContain("parts-messy.csv");
-  await page.screenshot({ path: artifactPath("part-page.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("part-page.png"), fullPage: true, caret: "initial" });
 
   // An operating point outside the quoted window is marked and flagged.
   await page.getByLabel("Operating IC").fill("500 mA");
@@ -113,7 +106,7 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   await page.waitForURL((url) => url.searchParams.get("ic") === "500 mA");
   await expect.poll(() => page.getByTestId("operating-point").textContent()).toContain("gain-off-point");
   expect(await plot.locator('g[data-series="operating-point"]').count()).toBe(1);
-  await page.screenshot({ path: artifactPath("part-page-operating-point.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("part-page-operating-point.png"), fullPage: true, caret: "initial" });
 
   // A second file corrects VCEO of the same part; the first intake can then not be rolled back on its own.
   const [header, , , row4] = readFileSync(MESSY_FILE, "utf8").split(/\r?\n/);
@@ -125,18 +118,18 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   await expect.poll(() => page.textContent("h1")).toBe("osk4460n-vceo.csv");
   const change = page.locator('[data-change-row="2"]');
   await expect.poll(() => change.locator("tbody tr").first().locator("td").allTextContents()).toEqual(["VCEO", "45 V", "→", "50 V"]);
-  await page.screenshot({ path: artifactPath("intake-change-preview.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-change-preview.png"), fullPage: true, caret: "initial" });
   await page.getByRole("button", { name: "Commit 1 part" }).click();
   await expect.poll(() => page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
 
   // Rolling back asks for a confirmation first; the server's refusal names the later intake.
   await page.goto(intakeUrl);
   await page.getByText("Roll back this intake…").click();
-  await page.screenshot({ path: artifactPath("intake-rollback-confirm.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-rollback-confirm.png"), fullPage: true, caret: "initial" });
   await page.getByRole("button", { name: "Yes, roll back parts-messy.csv" }).click();
   await expect.poll(() => page.getByRole("alert").first().textContent()).toContain("osk4460n-vceo.csv");
   expect(await page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
-  await page.screenshot({ path: artifactPath("intake-rollback-refused.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-rollback-refused.png"), fullPage: true, caret: "initial" });
   expect(pageErrors).toEqual([]);
 });
 
@@ -150,6 +143,6 @@ it("without JavaScript the drop zone is a plain upload form that still reaches t
   await page.waitForURL(/\/intakes\/[0-9a-f-]{36}$/);
   expect(await page.textContent("h1")).toBe("parts-three-gain-points.csv");
   expect(await page.locator("[data-state]").first().getAttribute("data-state")).toBe("previewed");
-  await page.screenshot({ path: artifactPath("intake-preview-no-js.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("intake-preview-no-js.png"), fullPage: true, caret: "initial" });
   await context.close();
 });

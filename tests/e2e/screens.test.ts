@@ -3,26 +3,20 @@
 import { afterAll, beforeAll, expect, inject, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { artifactPath, launchBrowser } from "../setup/browser.ts";
-import { signInCodeFrom, waitForMail } from "../setup/mail-catcher.ts";
+import { loginAs } from "../setup/browser-login.ts";
 
 let browser: Browser;
 let page: Page;
 const pageErrors: string[] = [];
 
 async function signIn(email: string): Promise<void> {
-  await page.goto(`${inject("appUrl")}/sign-in`);
-  const since = Date.now();
-  await page.getByLabel("E-mail address").fill(email);
-  await page.getByRole("button", { name: "Send me a code" }).click();
-  await page.waitForURL("**/sign-in/verify");
-  await page.getByLabel("Code").fill(signInCodeFrom(await waitForMail(inject("mailDir"), email, since)));
-  await page.getByRole("button", { name: "Sign in" }).click();
-  await page.waitForURL((url) => url.pathname === "/");
+  await loginAs(page, email);
+  await page.goto(`${inject("appUrl")}/`);
 }
 
 async function shoot(path: string, name: string): Promise<void> {
   await page.goto(`${inject("appUrl")}${path}`);
-  await page.screenshot({ path: artifactPath(`screen-${name}.png`), fullPage: true });
+  await page.screenshot({ path: artifactPath(`screen-${name}.png`), fullPage: true, caret: "initial" });
 }
 
 beforeAll(async () => {
@@ -42,7 +36,7 @@ afterAll(async () => {
 
 it("the catalogue: default view, hFE at a chosen IC, a refused filter and an empty result", async () => {
   await shoot("/catalogue", "catalogue");
-  await page.screenshot({ path: artifactPath("screen-catalogue-top.png") });
+  await page.screenshot({ path: artifactPath("screen-catalogue-top.png"), caret: "initial" });
   expect(await page.getByTestId("result-count").first().textContent()).toMatch(/^1–50 of \d+ parts · page 1 of \d+$/);
 
   await shoot("/catalogue?hfeAt=100mA&hfeMin=50&sort=hfe&dir=desc&cols=partNumber&cols=manufacturer&cols=vceo&cols=icMax&cols=hfe&cols=price&cols=stock&cols=flags", "catalogue-hfe");
@@ -62,17 +56,17 @@ it("a power part's page with its caution, offers and plot; its correction form r
   await page.getByTestId("caution").waitFor();
   expect(await page.getByTestId("caution").textContent()).toContain("safe operating area govern");
   expect(await page.getByTestId("offers").locator("tbody > tr").count()).toBeGreaterThan(0);
-  await page.screenshot({ path: artifactPath("screen-part-power.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("screen-part-power.png"), fullPage: true, caret: "initial" });
 
   await page.getByRole("link", { name: "Correct this part" }).click();
   await page.waitForURL(/\/edit$/);
   await expect.poll(() => page.textContent("h1")).toContain("Correct ");
-  await page.screenshot({ path: artifactPath("screen-part-edit.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("screen-part-edit.png"), fullPage: true, caret: "initial" });
   await page.getByLabel("IC max").fill("3 V");
   await page.getByRole("button", { name: "Save correction" }).click();
   await expect.poll(() => page.locator("#field-icMaxAmps-error").textContent()).toBe("a voltage (V) where a current is expected");
   expect(await page.getByLabel("IC max").inputValue()).toBe("3 V");
-  await page.screenshot({ path: artifactPath("screen-part-edit-error.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("screen-part-edit-error.png"), fullPage: true, caret: "initial" });
 });
 
 it("the intake pages: list, formats, one intake", async () => {
@@ -86,6 +80,6 @@ it("the intake pages: list, formats, one intake", async () => {
   await page.getByTestId("intakes").locator("tbody tr a").first().click();
   await page.waitForURL(/\/intakes\/[0-9a-f-]{36}$/);
   await page.getByTestId("problems-table").or(page.getByText("No problems")).first().waitFor();
-  await page.screenshot({ path: artifactPath("screen-intake.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("screen-intake.png"), fullPage: true, caret: "initial" });
   expect(pageErrors).toEqual([]);
 });

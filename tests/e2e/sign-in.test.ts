@@ -23,7 +23,7 @@ it("the demo engineer signs in through the pages with the e-mailed code and reac
 
   await page.goto(`${inject("appUrl")}/`);
   await expect.poll(() => new URL(page.url()).pathname).toBe("/sign-in");
-  await page.screenshot({ path: artifactPath("sign-in.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("sign-in.png"), fullPage: true, caret: "initial" });
 
   const since = Date.now();
   await page.getByLabel("E-mail address").fill("engineer@larkfield.example.com");
@@ -33,13 +33,13 @@ it("the demo engineer signs in through the pages with the e-mailed code and reac
 
   const code = signInCodeFrom(await waitForMail(inject("mailDir"), "engineer@larkfield.example.com", since));
   await page.getByLabel("Code").fill(code);
-  await page.screenshot({ path: artifactPath("verify.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("verify.png"), fullPage: true, caret: "initial" });
   await page.getByRole("button", { name: "Sign in" }).click();
 
   await page.waitForURL((url) => url.pathname === "/");
   await expect.poll(() => page.textContent("h1")).toBe("Hello, Ravi");
   await expect.poll(() => page.textContent("main")).toContain("Find the right transistor");
   expect(await page.getByRole("button", { name: "Sign out" }).isVisible()).toBe(true);
-  await page.screenshot({ path: artifactPath("dashboard-engineer.png"), fullPage: true });
+  await page.screenshot({ path: artifactPath("dashboard-engineer.png"), fullPage: true, caret: "initial" });
   expect(pageErrors).toEqual([]);
 });

@@ -39,7 +39,7 @@ describe("intake size limits", () => {
     expect(await fingerprintCatalogue(sequelize)).toEqual(before);
   });
 
-  it("takes a generated 100k-row parts file through preview, commit and rollback", { timeout: 180_000 }, async () => {
+  it("takes a generated 100k-row parts file through preview, commit and rollback", { timeout: 600_000 }, async () => {
     const maker = "Bulkwell Test Devices";
     const csv = Buffer.from(generateCompactPartsCsv(100_000, maker, "BKW"));
     expect(csv.length).toBeLessThan(MAX_INTAKE_BYTES);

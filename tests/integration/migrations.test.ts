@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Sequelize } from "sequelize";
 import { createMigrator } from "#db/migrator.ts";
-import { connect, dropDatabase, recreateDatabase } from "../setup/databases.ts";
+import { connect, dropDatabase, perRunName, recreateDatabase } from "../setup/databases.ts";
 
-const DATABASE = "betasift_test_migrations";
+const DATABASE = perRunName("betasift_test_migrations");
 
 async function tables(sequelize: Sequelize): Promise<string[]> {
   const [rows] = await sequelize.query(`SELECT tablename FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename`);

@@ -18,7 +18,11 @@ interface Row {
   method: "GET" | "POST";
   path: string | ((ids: Ids) => string);
   expect: Expectation;
+  /** Ends the visitor's session (sign-out): asked with a freshly signed-in agent instead of the shared one. */
+  fresh?: boolean;
 }
+
+const NO_INTAKE = "00000000-0000-4000-8000-000000000000";
 
 /** A page for these roles (admin always included): anonymous is sent to sign in, other roles get 403. */
 const pageFor = (roles: Visitor[], ok = 200): Expectation =>
@@ -33,6 +37,8 @@ const rows: Row[] = [
   { method: "GET", path: "/", expect: signedIn(200) },
   { method: "GET", path: "/sign-in", expect: { ...everyone(302), anonymous: 200 } },
   { method: "GET", path: "/sign-in/verify", expect: { ...everyone(302) } },
+  { method: "GET", path: "/sign-in/link", expect: everyone(302) },
+  { method: "POST", path: "/sign-out", expect: everyone(302), fresh: true },
   { method: "GET", path: "/people", expect: pageFor([]) },
   { method: "POST", path: "/people", expect: pageFor([], 400) },
   { method: "GET", path: (ids) => `/people/${ids.librarianId}`, expect: pageFor([]) },
@@ -50,6 +56,8 @@ const rows: Row[] = [
   { method: "GET", path: "/intakes/templates/offers", expect: pageFor(["librarian"]) },
   { method: "GET", path: (ids) => `/intakes/${ids.intakeId}`, expect: pageFor(["librarian"]) },
   { method: "GET", path: (ids) => `/intakes/${ids.intakeId}/file`, expect: pageFor(["librarian"]) },
+  { method: "POST", path: "/intakes/new", expect: pageFor(["librarian"], 400) },
+  { method: "POST", path: (ids) => `/intakes/${ids.intakeId}`, expect: pageFor(["librarian"], 400) },
   { method: "GET", path: "/api/health", expect: everyone(200) },
   { method: "GET", path: "/api/parts", expect: signedInApi(200) },
   { method: "GET", path: "/api/parts?polarity=sideways", expect: signedInApi(400) },
@@ -59,11 +67,20 @@ const rows: Row[] = [
   { method: "POST", path: "/api/intakes", expect: apiFor(["librarian"], 400) },
   { method: "GET", path: (ids) => `/api/intakes/${ids.intakeId}`, expect: apiFor(["librarian"]) },
   { method: "POST", path: (ids) => `/api/intakes/${ids.intakeId}/frobnicate`, expect: apiFor(["librarian"], 404) },
+  { method: "POST", path: `/api/intakes/${NO_INTAKE}/commit`, expect: apiFor(["librarian"], 404) },
+  { method: "POST", path: `/api/intakes/${NO_INTAKE}/discard`, expect: apiFor(["librarian"], 404) },
+  { method: "POST", path: `/api/intakes/${NO_INTAKE}/rollback`, expect: apiFor(["librarian"], 404) },
   { method: "GET", path: "/no/such/page", expect: everyone(404) },
   { method: "GET", path: "/api/no-such-thing", expect: everyone(404) },
 ];
 
 const agents = new Map<Visitor, Agent>();
+
+async function freshAgent(visitor: Visitor): Promise<Agent> {
+  const agent = newAgent();
+  if (visitor !== "anonymous") await signIn(agent, `${visitor}@larkfield.example.com`);
+  return agent;
+}
 let ids: Ids;
 
 beforeAll(async () => {
@@ -88,7 +105,7 @@ describe("role matrix", () => {
     for (const visitor of VISITORS) {
       const label = typeof row.path === "string" ? row.path : row.path({ librarianId: ":personId", partId: ":partId", intakeId: ":intakeId" });
       it(`${row.method} ${label} as ${visitor} answers ${row.expect[visitor]}`, async () => {
-        const agent = agents.get(visitor)!;
+        const agent = row.fresh ? await freshAgent(visitor) : agents.get(visitor)!;
         const path = typeof row.path === "string" ? row.path : row.path(ids);
         const response = row.method === "GET" ? await agent.get(path) : await agent.post(path);
         expect(response.status).toBe(row.expect[visitor]);

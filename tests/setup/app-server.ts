@@ -2,6 +2,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { existsSync } from "node:fs";
 import { createServer } from "node:net";
 import path from "node:path";
+import { SERVER_BUILD } from "./build.ts";
 
 const root = path.resolve(import.meta.dirname, "../..");
 
@@ -22,7 +23,7 @@ export async function freePort(): Promise<number> {
 }
 
 export function assertBuilt(): void {
-  if (!existsSync(path.join(root, "build/server/index.js"))) {
+  if (!existsSync(SERVER_BUILD)) {
     throw new Error("No production build: run `npx react-router build` (npm test does it first).");
   }
 }
@@ -44,7 +45,7 @@ export async function startAppServer(env: Record<string, string>, options: { wai
   const port = await freePort();
   const script = clustered ? "app/ops/serve.server.ts" : "app/ops/http-worker.server.ts";
   const url = `http://127.0.0.1:${port}`;
-  const child: ChildProcess = spawn(path.join(root, "node_modules/.bin/tsx"), [script, "build/server/index.js"], {
+  const child: ChildProcess = spawn(path.join(root, "node_modules/.bin/tsx"), [script, SERVER_BUILD], {
     cwd: root,
     env: {
       ...process.env,

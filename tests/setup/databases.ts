@@ -26,6 +26,11 @@ async function withMaintenanceClient<T>(work: (client: pg.Client) => Promise<T>)
   }
 }
 
+/** Test runs side by side (in one checkout or several) each get databases of their own. */
+export function perRunName(name: string): string {
+  return `${name}_${(process.env.BETASIFT_TEST_RUN ?? String(process.pid)).replace(/[^a-z0-9_]/gi, "").toLowerCase()}`;
+}
+
 /** Drops and creates a throwaway database for one test project. */
 export async function recreateDatabase(name: string): Promise<string> {
   await withMaintenanceClient(async (client) => {

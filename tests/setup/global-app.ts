@@ -1,11 +1,11 @@
 // Shared by the integration and browser projects: a throwaway database, a mail catcher and the built app.
-import { execFileSync } from "node:child_process";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import type { TestProject } from "vitest/node";
 import { startAppServer } from "./app-server.ts";
-import { dropDatabase, ensureClusterUp, prepareDatabase, recreateDatabase } from "./databases.ts";
+import { ensureFreshBuildLocked } from "./build.ts";
+import { dropDatabase, ensureClusterUp, perRunName, prepareDatabase, recreateDatabase } from "./databases.ts";
 import { startMailCatcher } from "./mail-catcher.ts";
 
 declare module "vitest" {
@@ -17,13 +17,10 @@ declare module "vitest" {
   }
 }
 
-const root = path.resolve(import.meta.dirname, "../..");
-
-export async function startTestApp(project: TestProject, databaseName: string): Promise<() => Promise<void>> {
+export async function startTestApp(project: TestProject, baseName: string): Promise<() => Promise<void>> {
+  const databaseName = perRunName(baseName);
   ensureClusterUp();
-  if (!existsSync(path.join(root, "build/server/index.js"))) {
-    execFileSync(path.join(root, "node_modules/.bin/react-router"), ["build"], { cwd: root, stdio: "ignore" });
-  }
+  ensureFreshBuildLocked();
   const databaseUrl = await recreateDatabase(databaseName);
   await prepareDatabase(databaseUrl, { seed: true });
   const mailDir = mkdtempSync(path.join(os.tmpdir(), "betasift-mail-"));
