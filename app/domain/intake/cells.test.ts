@@ -1,12 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { checkHeaderUnit, makeCellReader } from "./cells";
+import type { DecimalMark } from "../quantity";
 import { INTAKE_FORMATS, type ColumnSpec } from "./columns";
 
 const spec = (name: string, group?: string): ColumnSpec => {
   const columns = group ? INTAKE_FORMATS.parts.groups.concat(INTAKE_FORMATS.offers.groups).find((g) => g.prefix === group)!.columns : [...INTAKE_FORMATS.parts.columns, ...INTAKE_FORMATS.offers.columns];
   return columns.find((c) => c.name === name)!;
 };
-const read = (name: string, cell: string, headerUnit = "", decimalComma = false) => makeCellReader(spec(name), { headerUnit, decimalComma })(cell);
+const read = (name: string, cell: string, headerUnit = "", decimalMark: DecimalMark = "point", group?: string) => makeCellReader(spec(name, group), { headerUnit, decimalMark })(cell);
 
 describe("makeCellReader", () => {
   it("reads empty cells as no value", () => {
@@ -17,11 +18,11 @@ describe("makeCellReader", () => {
   it("reads quantities in SI units, with the header's unit and the file's decimal comma", () => {
     expect(read("ic_max", "100 mA")).toEqual({ ok: true, value: 0.1 });
     expect(read("ic_max", "100", "mA")).toEqual({ ok: true, value: 0.1 });
-    expect(read("ic_max", "1,250", "", true)).toEqual({ ok: true, value: 1.25 });
+    expect(read("ic_max", "1,250", "", "comma")).toEqual({ ok: true, value: 1.25 });
   });
 
   it("returns the same result for a repeated cell (the column's cache)", () => {
-    const reader = makeCellReader(spec("vceo"), { headerUnit: "", decimalComma: false });
+    const reader = makeCellReader(spec("vceo"), { headerUnit: "", decimalMark: "point" });
     const first = reader("45 V");
     expect(reader("45 V")).toBe(first);
     expect(reader("45 mA")).toEqual({ ok: false, message: "a current (mA) where a voltage is expected" });
@@ -38,7 +39,7 @@ describe("makeCellReader", () => {
 
   it("reads choices in any case, with lifecycle aliases", () => {
     expect(read("polarity", "Pnp")).toEqual({ ok: true, value: "pnp" });
-    expect(read("lifecycle", "LTB")).toEqual({ ok: true, value: "last-time-buy" });
+    expect(read("lifecycle", "LTB")).toEqual({ ok: true, value: "last-time-buy", reading: "read as last-time-buy" });
     expect(read("polarity", "PNP-NPN")).toEqual({ ok: false, message: "polarity must be NPN or PNP" });
   });
 

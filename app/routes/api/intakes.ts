@@ -14,9 +14,13 @@ const UploadSchema = z.object({
 const apiError = (status: number, code: string, message: string, details: unknown = null) =>
   Response.json({ error: { code, message, details } }, { status });
 
+const PageSchema = z.object({ page: z.coerce.number({ error: "page must be a whole number" }).int({ error: "page must be a whole number" }).min(1, { error: "page must be at least 1" }).default(1) });
+
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, "librarian");
-  return Response.json({ intakes: await listIntakes() });
+  const query = PageSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+  if (!query.success) return apiError(400, "invalid-query", "The intakes list takes page (1, 2, ...).", toFieldErrors(query.error));
+  return Response.json(await listIntakes(query.data.page));
 }
 
 export async function action({ request }: Route.ActionArgs) {
