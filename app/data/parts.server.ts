@@ -141,8 +141,8 @@ async function loadCatalogue(version: number): Promise<CatalogueCache> {
     const headline = headlineGain(part.gainPoints);
     return {
       part,
-      manufacturerLower: part.manufacturer.toLowerCase(),
-      partNumberLower: part.partNumber.toLowerCase(),
+      manufacturerLower: identityKey(part.manufacturer),
+      partNumberLower: identityKey(part.partNumber),
       packageLower: packageKey(part.packageName),
       headlineHfe: headline.value,
       hfeSummary: headline.summary,
@@ -288,7 +288,7 @@ function resultKey(query: PartListQuery): string {
 }
 
 function findMatches(parts: readonly CachedPart[], query: PartListQuery, currency: string | null): Match[] {
-  const q = query.q?.toLowerCase();
+  const q = query.q === undefined ? undefined : identityKey(query.q);
   const wantedPackages = new Set(query.package.map((p) => packageKey(p)));
   const wantedLifecycles = new Set<string>(query.lifecycle);
   const hfeAt = query.hfeAt;

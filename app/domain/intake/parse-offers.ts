@@ -73,7 +73,7 @@ function resolveCurrency(raw: RawRow, report: RowReport): string | null {
   if (given === null) {
     if (candidates === null || candidates.length !== 1) {
       const signs = [...new Set(signed.map((s) => s.money.sign))].join(", ");
-      report.problem("currency", `currency is required: ${signs} stands for several currencies (${listCodes(candidates ?? [])}); write the ISO code, e.g. ${candidates?.[0] ?? "USD"}`);
+      report.problem("currency", `currency is required: ${signs} stands for several currencies (${listCodes(candidates ?? [])}); write the ISO code in the currency column`);
       return null;
     }
     report.reading("currency", `read as ${candidates[0]}, from the ${signed[0]!.money.sign} in the prices`);

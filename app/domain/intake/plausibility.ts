@@ -42,7 +42,7 @@ export function warnAboutPart(spec: PartSpec, columnOf: ColumnLocator, todayIso?
     }
   });
   if (todayIso && spec.datasheetRevisionDate !== null && spec.datasheetRevisionDate > todayIso) {
-    warnings.push({ column: columnOf("datasheetRevisionDate"), message: `datasheet date ${spec.datasheetRevisionDate} is in the future (today is ${todayIso})` });
+    warnings.push({ column: columnOf("datasheetRevisionDate"), message: `datasheet date ${spec.datasheetRevisionDate} is in the future` });
   }
   return warnings;
 }
@@ -72,7 +72,7 @@ export function warnAboutOffer(row: OfferRow, columnOf: ColumnLocator, todayIso?
     }
   }
   if (todayIso && offer.asOf > todayIso) {
-    warnings.push({ column: columnOf("asOf"), message: `as-of date ${offer.asOf} is in the future (today is ${todayIso})` });
+    warnings.push({ column: columnOf("asOf"), message: `as-of date ${offer.asOf} is in the future` });
   }
   return warnings;
 }

@@ -139,7 +139,7 @@ function mapHeader(
     if (parenthesised && inParentheses) {
       ({ name: rawName, unit } = parenthesised);
       located = inParentheses;
-      readings.push({ column: rawName, value: cell.trim(), reading: `read as ${rawName} [${unit}]: the unit of the column` });
+      readings.push({ column: rawName, value: cell.trim(), reading: `read as "${rawName} [${unit}]": the column's unit is ${unit}` });
     }
     if (!located) {
       unknown.push(rawName);

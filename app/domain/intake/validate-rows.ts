@@ -118,7 +118,7 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
         const place = locator(issue.path, raw);
-        if (badColumns.has(place.column)) continue;
+        if (badColumns.has(place.column) || badAlternative(format, place.column, badColumns)) continue;
         const marker = emptyMarkers.get(place.column);
         const note = marker === undefined ? "" : ` ("${marker}" counts as an empty cell)`;
         rowProblems.push(cellProblem(record.row, place.column, cellText(record.cells, table, place.column), place.context + issue.message + note));
@@ -164,6 +164,17 @@ function listPresentFields(table: Table): string[] {
     }
   }
   return [...present];
+}
+
+// A point's values may come from an alternative column (`gainN_hfe`): when that one failed, the point's other
+// columns are not judged again ("give at least one of hFE min, typ or max" would only repeat the problem).
+function badAlternative(format: IntakeFormat, column: string, badColumns: ReadonlySet<string>): boolean {
+  for (const group of format.groups) {
+    const match = new RegExp(`^${group.prefix}(\\d+)_`).exec(column);
+    if (!match) continue;
+    return group.columns.some((c) => c.alternative && badColumns.has(`${group.prefix}${match[1]}_${c.name}`));
+  }
+  return false;
 }
 
 function pointFor(raw: RawRow, group: ColumnGroupSpec, pointNumber: number): RawPoint {
