@@ -257,19 +257,18 @@ const SORT_KEYS: Record<PartListQuery["sort"], SortKey> = {
   },
 };
 
-// Plain code-unit order on lower-cased text: fast enough to sort a large catalogue on every uncached query.
-function compareKeys(a: Key, b: Key): number {
+// Plain code-unit order on identity keys: fast enough to sort a large catalogue on every uncached query.
+// A tuple key groups first (its leading parts, always ascending) and orders by its last part in the asked direction.
+function compareKeys(a: Key, b: Key, direction = 1): number {
   if (Array.isArray(a) && Array.isArray(b)) {
     for (let i = 0; i < a.length; i += 1) {
-      const order = compareKeys(a[i] as string | number, b[i] as string | number);
+      const order = compareKeys(a[i] as string | number, b[i] as string | number) * (i === a.length - 1 ? direction : 1);
       if (order !== 0) return order;
     }
     return 0;
   }
-  if (typeof a === "number" && typeof b === "number") return a - b;
-  const x = String(a);
-  const y = String(b);
-  return x < y ? -1 : x > y ? 1 : 0;
+  const order = typeof a === "number" && typeof b === "number" ? a - b : String(a) < String(b) ? -1 : String(a) > String(b) ? 1 : 0;
+  return order * direction;
 }
 
 interface Match {
@@ -315,7 +314,7 @@ function findMatches(parts: readonly CachedPart[], query: PartListQuery, currenc
     if (a.key === null || b.key === null) {
       if (a.key !== b.key) return a.key === null ? 1 : -1;
     } else {
-      const order = compareKeys(a.key, b.key) * direction;
+      const order = compareKeys(a.key, b.key, direction);
       if (order !== 0) return order;
     }
     return (

@@ -74,3 +74,34 @@ describe("checkHeaderUnit", () => {
     expect(checkHeaderUnit(spec("ic", "gain"), "µA")).toBeNull();
   });
 });
+
+describe("what people type (issue items 11 and 15)", () => {
+  it("reads digit grouping in whole-number columns in any file, and says so", () => {
+    expect(read("stock", "24.000", "", "comma")).toEqual({ ok: true, value: 24000, reading: "read as 24000 (digit grouping)" });
+    expect(read("stock", "12,000")).toEqual({ ok: true, value: 12000, reading: "read as 12000 (digit grouping)" });
+    expect(read("stock", "1.000.000", "", "either")).toEqual({ ok: true, value: 1000000, reading: "read as 1000000 (digit grouping)" });
+    expect(read("qty", "100+", "", "point", "break")).toEqual({ ok: true, value: 100, reading: "read as 100 (from 100 on)" });
+    expect(read("stock", "100+").ok).toBe(false);
+  });
+
+  it("reads n/a, - and dashes as an empty cell", () => {
+    for (const cell of ["n/a", "N/A", "-", "—", "–"]) expect(read("ft", cell)).toEqual({ ok: true, value: null, reading: "read as an empty cell" });
+  });
+
+  it("reads polarity letters and lifecycle words, with the reading", () => {
+    expect(read("polarity", "n")).toEqual({ ok: true, value: "npn", reading: "read as NPN" });
+    expect(read("lifecycle", "EOL")).toEqual({ ok: true, value: "obsolete", reading: "read as obsolete" });
+  });
+
+  it("reads the Unicode minus sign as a minus", () => {
+    expect(read("temp", "\u221255 °C", "", "point", "gain")).toEqual({ ok: true, value: -55, reading: "read as -55 °C (minus sign)" });
+  });
+
+  it("reads a price with its currency sign", () => {
+    expect(read("price", "€0,12", "", "point", "break")).toEqual({ ok: true, value: { kind: "money", amount: 0.12, sign: "€", currencies: ["EUR"] } });
+  });
+
+  it("reads back the apostrophe our rejected-rows download puts before formula-like cells", () => {
+    expect(read("vceo", "'-45 V")).toEqual({ ok: true, value: -45 });
+  });
+});

@@ -27,7 +27,8 @@ export function warnAboutPart(spec: PartSpec, columnOf: ColumnLocator, todayIso?
       message: `IC max ${amps(spec.icMaxAmps)} is far above what a ${outline.name} package carries (parts in it are rated up to about ${amps(outline.maxIcAmps)}); check the unit`,
     });
   }
-  if (spec.ptotWatts !== null && spec.icMaxAmps * LOWEST_DROP_VOLTS > spec.ptotWatts) {
+  // Relative margin so that 3 A × 0.1 V against 0.3 W (0.30000000000000004 in binary) is not a warning.
+  if (spec.ptotWatts !== null && spec.icMaxAmps * LOWEST_DROP_VOLTS > spec.ptotWatts * (1 + 1e-9)) {
     warnings.push({
       column: columnOf("icMaxAmps"),
       message: `IC max ${amps(spec.icMaxAmps)} is far above what Ptot ${watts(spec.ptotWatts)} can carry: even a ${LOWEST_DROP_VOLTS} V drop at that current dissipates ${watts(spec.icMaxAmps * LOWEST_DROP_VOLTS)}; check the unit`,
