@@ -25,7 +25,7 @@ export function ReadingsTable({ readings, notListed }: { readings: readonly Read
               <td className="max-w-48 truncate px-3 py-1.5 font-mono text-xs leading-5" title={r.value}>
                 {r.value === "" ? <span className="text-ink/40">empty</span> : r.value}
               </td>
-              <td className="px-3 py-1.5">{r.reading}</td>
+              <td className="min-w-40 px-3 py-1.5">{r.reading}</td>
               <td className="px-3 py-1.5 text-right tabular-nums">{r.count}</td>
               <td className="px-3 py-1.5 tabular-nums text-ink/70">
                 {r.rows.join(", ")}

@@ -49,15 +49,23 @@ for (const outline of PACKAGE_OUTLINES) {
 
 /** The known outline a package name stands for, or null when the table does not know it. */
 export function resolvePackageOutline(text: string): string | null {
-  return BY_COMPACT.get(compact(text))?.name ?? null;
+  return findPackageOutline(text)?.name ?? null;
 }
+
+// Package names repeat down a file, so their look-ups are kept (up to a few thousand names).
+const FOUND = new Map<string, PackageOutline | null>();
+const FOUND_LIMIT = 4096;
 
 /** The known outline's entry for a package name, or null. */
 export function findPackageOutline(text: string): PackageOutline | null {
-  return BY_COMPACT.get(compact(text)) ?? null;
+  const known = FOUND.get(text);
+  if (known !== undefined) return known;
+  const outline = BY_COMPACT.get(compact(text)) ?? null;
+  if (FOUND.size < FOUND_LIMIT) FOUND.set(text, outline);
+  return outline;
 }
 
 /** The key packages are grouped and filtered by: the known outline's name, else the name's compact form. */
 export function packageKey(text: string): string {
-  return resolvePackageOutline(text) ?? compact(text);
+  return findPackageOutline(text)?.name ?? compact(text);
 }

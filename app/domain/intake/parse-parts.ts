@@ -71,11 +71,16 @@ const isHfe = (value: CellValue): value is HfeValue | number => typeof value ===
 
 // hFE may come from the `hfe` column ("100-300") and from hfe_min, hfe_typ, hfe_max; each value must be said once.
 function assembleGainPoint(point: RawPoint, report: RowReport): Record<string, unknown> {
-  const { hfe: _combined, hfeMin: _min, hfeTyp: _typ, hfeMax: _max, ...rest } = point.values;
+  const v = point.values;
+  const plain = (value: CellValue | undefined) => value === undefined || value === null || typeof value === "number";
+  // The usual row: plain numbers in the three columns, no `hfe` column; nothing to merge.
+  if ((v.hfe === undefined || v.hfe === null) && plain(v.hfeMin) && plain(v.hfeTyp) && plain(v.hfeMax)) {
+    return { icAmps: v.icAmps, vceVolts: v.vceVolts, hfeMin: v.hfeMin ?? null, hfeTyp: v.hfeTyp ?? null, hfeMax: v.hfeMax ?? null, tempC: v.tempC };
+  }
   const merged: Record<HfeRole, number | null> = { hfeMin: null, hfeTyp: null, hfeMax: null };
   const from: Partial<Record<HfeRole, string>> = {};
   for (const [field, role] of HFE_SOURCES) {
-    const cell = point.values[field];
+    const cell = v[field];
     if (cell === undefined || !isHfe(cell)) continue;
     const stated = typeof cell === "number" && role === null ? null : asHfeValue(cell, role ?? "hfeMin");
     if (!stated) continue;
@@ -92,7 +97,7 @@ function assembleGainPoint(point: RawPoint, report: RowReport): Record<string, u
       from[statedRole] ??= column;
     }
   }
-  return { ...rest, ...merged };
+  return { icAmps: v.icAmps, vceVolts: v.vceVolts, ...merged, tempC: v.tempC };
 }
 
 function identifyPart(raw: RawRow): string | null {

@@ -46,6 +46,7 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
   const kind = format.kind as K;
   const problems = new ProblemCollector(table.problems);
   const presentFields = listPresentFields(table);
+  const present = new Set(presentFields);
   const readings = new ReadingCollector();
   const firstRowByKey = new Map<string, number>();
   const result = (rows: Array<IntakeRow<V>>): IntakeParseResult<K, V> => ({
@@ -78,48 +79,49 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
     }
     const raw: RawRow = { fields: {}, points: {} };
     for (const group of format.groups) raw.points[group.field] = [];
-    const badColumns = new Set<string>();
-    const rowReadings: CellReading[] = [];
-    const emptyMarkers = new Map<string, string>();
-    const emptyFields: string[] = [];
+    // Made only when a row needs them: most rows of a large file have no bad cell, reading or empty cell.
+    let badColumns: Set<string> | null = null;
+    let rowReadings: CellReading[] | null = null;
+    let emptyMarkers: Map<string, string> | null = null;
+    let emptyFields: string[] | null = null;
 
     for (const column of table.columns) {
       const cell = record.cells[column.index] ?? "";
       const result = column.read(cell);
       if (!result.ok) {
-        badColumns.add(column.name);
+        (badColumns ??= new Set()).add(column.name);
         rowProblems.push(cellProblem(record.row, column.name, cell.trim(), result.message));
       } else if (result.reading) {
-        rowReadings.push({ column: column.name, value: cell.trim(), reading: result.reading });
+        (rowReadings ??= []).push({ column: column.name, value: cell.trim(), reading: result.reading });
       }
-      if (result.ok && result.value === null && isEmptyMarker(cell)) emptyMarkers.set(column.name, cell.trim());
+      if (result.ok && result.value === null && isEmptyMarker(cell)) (emptyMarkers ??= new Map()).set(column.name, cell.trim());
       const value = result.ok ? result.value : null;
       // A point exists when any of its cells is filled in (only empty cells read as null), even one that failed.
       if (column.group) {
         if (!result.ok || value !== null) pointFor(raw, column.group, column.pointNumber).values[column.spec.field] = value;
       } else {
         raw.fields[column.spec.field] = value;
-        if (result.ok && value === null) emptyFields.push(column.spec.field);
+        if (result.ok && value === null) (emptyFields ??= []).push(column.spec.field);
       }
     }
     for (const group of format.groups) {
       raw.points[group.field].sort((a, b) => a.pointNumber - b.pointNumber);
-      if (presentFields.includes(group.field) && raw.points[group.field].length === 0) emptyFields.push(group.field);
+      if (present.has(group.field) && raw.points[group.field].length === 0) (emptyFields ??= []).push(group.field);
     }
 
     const report: RowReport = {
       problem: (column, message) => {
-        badColumns.add(column);
+        (badColumns ??= new Set()).add(column);
         rowProblems.push(cellProblem(record.row, column, cellText(record.cells, table, column), message));
       },
-      reading: (column, reading) => rowReadings.push({ column, value: cellText(record.cells, table, column) ?? "", reading }),
+      reading: (column, reading) => (rowReadings ??= []).push({ column, value: cellText(record.cells, table, column) ?? "", reading }),
     };
     const parsed = rules.schema.safeParse(rules.assemble(raw, report));
     if (!parsed.success) {
       for (const issue of parsed.error.issues) {
         const place = locator(issue.path, raw);
-        if (badColumns.has(place.column) || badAlternative(format, place.column, badColumns)) continue;
-        const marker = emptyMarkers.get(place.column);
+        if (badColumns?.has(place.column) || (badColumns && badAlternative(format, place.column, badColumns))) continue;
+        const marker = emptyMarkers?.get(place.column);
         const note = marker === undefined ? "" : ` ("${marker}" counts as an empty cell)`;
         rowProblems.push(cellProblem(record.row, place.column, cellText(record.cells, table, place.column), place.context + issue.message + note));
       }
@@ -138,8 +140,8 @@ export function validateRows<K extends IntakeKind, V>(table: Table, format: Inta
       for (const warning of rules.warn?.(parsed.data, columnOf) ?? []) {
         rowProblems.push(cellProblem(record.row, warning.column, cellText(record.cells, table, warning.column), warning.message, "warning"));
       }
-      rows.push(emptyFields.length > 0 ? { row: record.row, value: parsed.data, empty: emptyFields } : { row: record.row, value: parsed.data });
-      for (const reading of rowReadings) readings.add(record.row, reading);
+      rows.push(emptyFields ? { row: record.row, value: parsed.data, empty: emptyFields } : { row: record.row, value: parsed.data });
+      for (const reading of rowReadings ?? []) readings.add(record.row, reading);
     }
     problems.add(record.row, rowProblems);
     return problems.withinCap();
