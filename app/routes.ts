@@ -18,6 +18,7 @@ export default [
     route("templates/:kind", "routes/intakes/template.ts"),
     route(":intakeId", "routes/intakes/intake.tsx"),
     route(":intakeId/file", "routes/intakes/file.ts"),
+    route(":intakeId/rejected", "routes/intakes/rejected.ts"),
   ]),
   ...prefix("people", [index("routes/people/list.tsx"), route(":personId", "routes/people/person.tsx")]),
   ...prefix("api", [

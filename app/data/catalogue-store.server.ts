@@ -6,6 +6,7 @@ import { from as copyFrom } from "pg-copy-streams";
 import type { Transaction } from "sequelize";
 import { QueryTypes } from "sequelize";
 import type { CataloguePart, GainPoint, Offer, PartSpec, SaturationPoint } from "#app/domain/part.ts";
+import { identityKey } from "#app/domain/intake/identity.ts";
 import { partKey } from "#app/domain/part.ts";
 import { db } from "#app/lib/db.server.ts";
 
@@ -146,12 +147,18 @@ export async function insertMany(
   await db().sequelize.query(`INSERT INTO ${table} (${names}) SELECT ${names} FROM ${scratch} ${conflict}`, { transaction });
 }
 
-const PART_WRITE_COLUMNS: Array<[string, string]> = [["id", "uuid"], ...PART_FIELD_COLUMNS.map(([, column, type]) => [column, type] as [string, string])];
+// The identity keys are written with every part: PostgreSQL compares them and never folds names itself.
+const PART_WRITE_COLUMNS: Array<[string, string]> = [
+  ["id", "uuid"],
+  ["manufacturer_key", "text"],
+  ["part_number_key", "text"],
+  ...PART_FIELD_COLUMNS.map(([, column, type]) => [column, type] as [string, string]),
+];
 
 function* partCells(parts: ReadonlyArray<{ id: string; spec: PartSpec }>): Generator<unknown[]> {
   for (const { id, spec } of parts) {
     const normal = normaliseSpec(spec);
-    yield [id, ...PART_FIELD_COLUMNS.map(([field]) => normal[field])];
+    yield [id, identityKey(spec.manufacturer), identityKey(spec.partNumber), ...PART_FIELD_COLUMNS.map(([field]) => normal[field])];
   }
 }
 
@@ -164,7 +171,9 @@ export async function insertParts(parts: ReadonlyArray<{ id: string; spec: PartS
 export async function updateParts(parts: ReadonlyArray<{ id: string; spec: PartSpec }>, transaction: Transaction): Promise<void> {
   if (parts.length === 0) return;
   const scratch = await copyToScratch("parts", PART_WRITE_COLUMNS, partCells(parts), transaction);
-  const sets = PART_FIELD_COLUMNS.map(([, column]) => `${column} = u.${column}`).join(", ");
+  const sets = PART_WRITE_COLUMNS.slice(1)
+    .map(([column]) => `${column} = u.${column}`)
+    .join(", ");
   await db().sequelize.query(`UPDATE parts p SET ${sets}, updated_at = now() FROM ${scratch} u WHERE p.id = u.id`, { transaction });
 }
 
@@ -232,8 +241,9 @@ function encodedFieldSql(encoded: string, index: number, type: string): string {
 }
 
 /**
- * Inserts one part per encoded spec that `source` (a FROM item with a jsonb column `spec`) yields, each with its
- * "created" revision, in one statement inside PostgreSQL: no spec crosses the wire again. Returns how many.
+ * Inserts one part per encoded spec that `source` (a FROM item with a jsonb column `spec` and text columns
+ * `manufacturer_key`, `part_number_key`) yields, each with its "created" revision, in one statement inside
+ * PostgreSQL: no spec crosses the wire again. Returns how many.
  */
 export async function insertPartsFromEncoded(source: string, bind: unknown[], intakeIdParam: string, transaction: Transaction): Promise<number> {
   const columns = PART_FIELD_COLUMNS.map(([, column]) => column).join(", ");
@@ -242,7 +252,8 @@ export async function insertPartsFromEncoded(source: string, bind: unknown[], in
   await db().sequelize.query(`SET LOCAL work_mem = '256MB'`, { transaction });
   const [rows] = (await db().sequelize.query(
     `WITH created AS (
-       INSERT INTO parts (id, ${columns}) SELECT gen_random_uuid(), ${values} FROM ${source}
+       INSERT INTO parts (id, manufacturer_key, part_number_key, ${columns})
+       SELECT gen_random_uuid(), s.manufacturer_key, s.part_number_key, ${values} FROM ${source}
        RETURNING *
      ), revised AS (
        INSERT INTO part_revisions (part_id, action, intake_id, before, after)
@@ -257,7 +268,7 @@ export async function insertPartsFromEncoded(source: string, bind: unknown[], in
 // Identity look-ups beyond this many parts are sent in several statements.
 const CHUNK_ROWS = 20_000;
 
-/** Parts of the catalogue with these identities (manufacturer + part number, trimmed, any case), by part key. */
+/** Parts of the catalogue with these identities (manufacturer + part number as look-alike names), by part key. */
 export async function findPartsByKeys(
   identities: ReadonlyArray<{ manufacturer: string; partNumber: string }>,
   transaction?: Transaction,
@@ -267,9 +278,9 @@ export async function findPartsByKeys(
     const chunk = identities.slice(start, start + CHUNK_ROWS);
     const rows = await db().sequelize.query<PartRow>(
       `SELECT ${PART_SELECT} FROM parts p
-       JOIN unnest($1::text[], $2::text[]) AS k(m, n) ON lower(trim(p.manufacturer)) = k.m AND lower(trim(p.part_number)) = k.n`,
+       JOIN unnest($1::text[], $2::text[]) AS k(m, n) ON p.manufacturer_key = k.m AND p.part_number_key = k.n`,
       {
-        bind: [chunk.map((i) => i.manufacturer.trim().toLowerCase()), chunk.map((i) => i.partNumber.trim().toLowerCase())],
+        bind: [chunk.map((i) => identityKey(i.manufacturer)), chunk.map((i) => identityKey(i.partNumber))],
         type: QueryTypes.SELECT,
         transaction,
       },

@@ -1,11 +1,14 @@
 // Intakes: preview an uploaded file (stored byte for byte with its parse), then commit, discard or roll back.
 import { randomUUID } from "node:crypto";
 import { QueryTypes, type Transaction } from "sequelize";
-import { compareWithCatalogue, listPartChanges, matchOffersToParts, type FieldChange } from "#app/domain/intake/compare.ts";
+import { findChangedRow, type ChangeSetRow } from "#app/domain/intake/change-set.ts";
+import { compareWithCatalogue, markCleared, matchOffersToParts, type FieldChange } from "#app/domain/intake/compare.ts";
+import { identityKey } from "#app/domain/intake/identity.ts";
+import { mergeOffer } from "#app/domain/intake/merge.ts";
 import type { OfferRow } from "#app/domain/intake/offer-schema.ts";
-import { offerKey } from "#app/domain/intake/parse-offers.ts";
 import { parseIntakeFile } from "#app/domain/intake/parse-intake.ts";
 import { countRejectedRows, hasFileError, type IntakeKind, type IntakeProblem, type IntakeRow } from "#app/domain/intake/problems.ts";
+import type { IntakeReading } from "#app/domain/intake/readings.ts";
 import { partKey, type Offer, type PartSpec } from "#app/domain/part.ts";
 import { db } from "#app/lib/db.server.ts";
 import { queueIntakeReport } from "#app/lib/jobs.server.ts";
@@ -20,7 +23,6 @@ import {
   insertMany,
   insertPartRevisions,
   insertPartsFromEncoded,
-  insertParts,
   lockCatalogue,
   normaliseSpecInPlace,
   readCatalogueVersion,
@@ -31,6 +33,7 @@ import {
   type OfferRowSql,
   type PartRevisionInsert,
 } from "./catalogue-store.server.ts";
+import { findMissingParts, type MissingPart } from "./intake-missing.server.ts";
 
 export type IntakeState = "previewed" | "committed" | "discarded" | "rolled-back";
 
@@ -63,7 +66,8 @@ export interface IntakeChangeView {
   status: "new" | "changed" | "unchanged";
   manufacturer: string;
   partNumber: string;
-  fields: Array<{ field: string; before: unknown; after: unknown }>;
+  /** `cleared`: an empty cell in a column the file has cleared the value (absent columns change nothing). */
+  fields: Array<{ field: string; before: unknown; after: unknown; cleared?: true }>;
 }
 
 export interface IntakeDetail extends IntakeView {
@@ -73,9 +77,18 @@ export interface IntakeDetail extends IntakeView {
   changes: IntakeChangeView[];
   /** How many accepted rows the intake has; `changes` holds at most DETAIL_LIMIT of them (changed and new first). */
   changesTotal: number;
+  /** How cells were read when not taken literally, grouped by column and text. */
+  readings: IntakeReading[];
+  /** Cells read in ways past the listed readings. */
+  readingsNotListed: number;
+  /** Catalogue parts of the re-imported manufacturers that the file leaves out (kept as they are). */
+  missingParts: MissingPart[];
+  missingTotal: number;
 }
 
-export type IntakeOperationResult = { ok: true; intake: IntakeView } | { ok: false; code: "not-found" | "wrong-state" | "blocked"; message: string };
+export type IntakeOperationResult =
+  | { ok: true; intake: IntakeView }
+  | { ok: false; code: "not-found" | "wrong-state" | "blocked" | "stale"; message: string };
 
 /** The most problems and row changes one intake answer carries; a 100k-row file stays a readable answer. */
 export const DETAIL_LIMIT = 2000;
@@ -142,14 +155,14 @@ function normaliseOffer(offer: Offer): Offer {
   return { ...offer, priceBreaks: [...offer.priceBreaks].sort((a, b) => a.quantity - b.quantity) };
 }
 
-function offerChanges(before: Offer | null, after: Offer): FieldChange[] {
+function offerChanges(before: Offer | null, after: Offer, empty?: readonly string[]): FieldChange[] {
   const changes: Array<{ field: string; before: unknown; after: unknown }> = [];
   for (const field of OFFER_FIELDS) {
     const a = before ? before[field] : null;
     const b = after[field];
     if (JSON.stringify(a ?? null) !== JSON.stringify(b ?? null)) changes.push({ field, before: a ?? null, after: b ?? null });
   }
-  return changes as unknown as FieldChange[];
+  return markCleared(changes, empty) as unknown as FieldChange[];
 }
 
 interface ComparedRowRecord {
@@ -173,9 +186,16 @@ async function findExisting(specs: readonly PartSpec[], transaction?: Transactio
   return existing;
 }
 
-/** Rows the parse (or the stored preview) owns: their point lists are sorted where they are. */
-async function compareParts(rows: ReadonlyArray<IntakeRow<PartSpec>>, transaction?: Transaction): Promise<Comparison & { existing: ExistingParts }> {
-  const normal = rows.map(({ row, value }) => ({ row, value: normaliseSpecInPlace(value) }));
+/**
+ * Rows the parse (or the stored preview) owns: their point lists are sorted where they are. With `present` (the
+ * file's columns) a row is merged into its catalogue part, so columns the file lacks stay as they are.
+ */
+async function compareParts(
+  rows: ReadonlyArray<IntakeRow<PartSpec>>,
+  transaction?: Transaction,
+  present?: ReadonlySet<string>,
+): Promise<Comparison & { existing: ExistingParts }> {
+  const normal = rows.map(({ row, value, empty }) => ({ row, value: normaliseSpecInPlace(value), empty }));
   const found = await findPartsByKeys(
     normal.map((r) => r.value),
     transaction,
@@ -186,7 +206,7 @@ async function compareParts(rows: ReadonlyArray<IntakeRow<PartSpec>>, transactio
     existing.set(key, { id: part.id, spec: specOf(part) });
     specs.set(key, specOf(part));
   }
-  const comparison = compareWithCatalogue(normal, specs);
+  const comparison = compareWithCatalogue(normal, specs, [], present);
   return {
     rows: comparison.rows.map((r) => ({ row: r.row, status: r.status, value: r.value, changes: r.changes })),
     counts: { new: comparison.counts.new, changed: comparison.counts.changed, unchanged: comparison.counts.unchanged },
@@ -203,6 +223,7 @@ interface OfferTarget {
 async function compareOffers(
   rows: ReadonlyArray<IntakeRow<OfferRow>>,
   transaction?: Transaction,
+  present?: ReadonlySet<string>,
 ): Promise<Comparison & { targets: Map<number, OfferTarget> }> {
   const parts = await findPartsByKeys(rows.map((r) => r.value), transaction);
   const extraProblems = matchOffersToParts(rows, new Set(parts.keys()));
@@ -215,16 +236,16 @@ async function compareOffers(
       })
     : [];
   const existing = new Map<string, Offer & { id: string }>();
-  for (const row of offerRows) existing.set(`${row.part_id}\u0000${row.supplier.trim().toLowerCase()}`, rowToOffer(row));
+  for (const row of offerRows) existing.set(`${row.part_id}\u0000${identityKey(row.supplier)}`, rowToOffer(row));
   const counts = { new: 0, changed: 0, unchanged: 0 };
   const compared: ComparedRowRecord[] = [];
   const targets = new Map<number, OfferTarget>();
-  for (const { row, value } of rows) {
+  for (const { row, value, empty } of rows) {
     const part = parts.get(partKey(value.manufacturer, value.partNumber));
     if (!part) continue;
-    const offer = normaliseOffer(value.offer);
-    const before = existing.get(`${part.id}\u0000${offer.supplier.trim().toLowerCase()}`) ?? null;
-    const changes = offerChanges(before && normaliseOffer(before), offer);
+    const before = existing.get(`${part.id}\u0000${identityKey(value.offer.supplier)}`) ?? null;
+    const offer = normaliseOffer(before && present ? mergeOffer(withoutId(before)!, value.offer, present) : value.offer);
+    const changes = offerChanges(before && normaliseOffer(before), offer, empty);
     const status = !before ? "new" : changes.length > 0 ? "changed" : "unchanged";
     counts[status] += 1;
     compared.push({ row, status, value: { ...value, offer }, changes: before ? changes : [] });
@@ -235,22 +256,35 @@ async function compareOffers(
 
 // ---- preview ----------------------------------------------------------------------------------
 
+/** Manufacturers (identity keys) the file re-imports: at least one of its rows names a part the catalogue has. */
+function reimportedManufacturers(rows: readonly ComparedRowRecord[]): string[] {
+  const keys = new Set<string>();
+  for (const row of rows) if (row.status !== "new") keys.add(identityKey(row.value.manufacturer));
+  return [...keys];
+}
+
 /** Parses and compares an uploaded file, storing the file, its problems and its rows; the catalogue is not touched. */
 export async function previewIntake(input: { kind: IntakeKind; fileName: string; bytes: Uint8Array; uploadedBy: string }): Promise<IntakeView> {
   const comparedAtVersion = await readCatalogueVersion();
-  const parsed = parseIntakeFile(input.kind, input.bytes);
+  const parsed = parseIntakeFile(input.kind, input.bytes, { todayIso: new Date().toISOString().slice(0, 10) });
   const fileRefused = hasFileError(parsed.problems);
+  const present = new Set(parsed.presentFields);
+  const accepted = fileRefused ? [] : parsed.rows;
   const comparison: Comparison =
-    parsed.kind === "parts" ? await compareParts(fileRefused ? [] : parsed.rows) : await compareOffers(fileRefused ? [] : parsed.rows);
+    parsed.kind === "parts" ? await compareParts(accepted as typeof parsed.rows, undefined, present) : await compareOffers(accepted as typeof parsed.rows, undefined, present);
   const problems = [...parsed.problems, ...comparison.extraProblems];
+  const missing =
+    parsed.kind === "parts" && !fileRefused ? await findMissingParts(reimportedManufacturers(comparison.rows), parsed.identities) : { parts: [], total: 0 };
   const id = randomUUID();
   const sequelize = db().sequelize;
   await sequelize.transaction(async (transaction) => {
     const parsedRows = await copyParsedRows(parsed.kind, comparison.rows, transaction);
     await sequelize.query(
       `INSERT INTO intakes (id, kind, file_name, size_bytes, file_bytes, uploaded_by, state, file_refused, new_count, changed_count,
-         unchanged_count, rejected_count, warning_count, problem_count, parsed_rows, compared_at_version, created_at, updated_at)
-       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, ${parsedRows}, $14, clock_timestamp(), clock_timestamp())`,
+         unchanged_count, rejected_count, warning_count, problem_count, parsed_rows, compared_at_version, readings, readings_not_listed,
+         missing_parts, missing_count, created_at, updated_at)
+       VALUES ($1, $2, $3, $4, $5, $6, 'previewed', $7, $8, $9, $10, $11, $12, $13, ${parsedRows}, $14, $15, $16, $17, $18,
+         clock_timestamp(), clock_timestamp())`,
       {
         bind: [
           id,
@@ -267,6 +301,10 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
           problems.filter((p) => p.severity === "warning").length,
           problems.length,
           comparedAtVersion,
+          JSON.stringify(parsed.readings),
+          parsed.readingsNotListed,
+          JSON.stringify(missing.parts),
+          missing.total,
         ],
         transaction,
       },
@@ -292,12 +330,26 @@ export async function previewIntake(input: { kind: IntakeKind; fileName: string;
 
 // ---- reads ------------------------------------------------------------------------------------
 
-export async function listIntakes(): Promise<IntakeView[]> {
-  const rows = await db().sequelize.query<IntakeSql>(
-    `SELECT ${INTAKE_SELECT} FROM intakes i LEFT JOIN users u ON u.id = i.uploaded_by ORDER BY i.created_at DESC LIMIT 500`,
-    { type: QueryTypes.SELECT },
-  );
-  return rows.map(toView);
+export const INTAKES_PAGE_SIZE = 50;
+
+export interface IntakeList {
+  intakes: IntakeView[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+/** One page of every intake, newest first. */
+export async function listIntakes(page = 1, pageSize = INTAKES_PAGE_SIZE): Promise<IntakeList> {
+  const sequelize = db().sequelize;
+  const [rows, [counted]] = await Promise.all([
+    sequelize.query<IntakeSql>(
+      `SELECT ${INTAKE_SELECT} FROM intakes i LEFT JOIN users u ON u.id = i.uploaded_by ORDER BY i.created_at DESC, i.id DESC LIMIT $1 OFFSET $2`,
+      { bind: [pageSize, (page - 1) * pageSize], type: QueryTypes.SELECT },
+    ),
+    sequelize.query<{ total: number }>(`SELECT count(*)::int AS total FROM intakes`, { type: QueryTypes.SELECT }),
+  ]);
+  return { intakes: rows.map(toView), total: counted?.total ?? 0, page, pageSize };
 }
 
 interface ProblemSql {
@@ -308,13 +360,18 @@ interface ProblemSql {
   severity: "error" | "warning";
 }
 
-type StoredRow = [row: number, status: "new" | "changed" | "unchanged", value: unknown, changes: FieldChange[]];
+// Parts carry their identity keys, so a commit inserts new parts inside PostgreSQL with the app's keys.
+type StoredRow = [row: number, status: "new" | "changed" | "unchanged", value: unknown, changes: FieldChange[], keys?: [string, string]];
 
 // Row by row, so the positional form of one row is garbage before the next is built (a 100k-row file stays lean).
 function* encodeRows(kind: IntakeKind, rows: readonly ComparedRowRecord[]): Generator<[number, string]> {
   for (let n = 0; n < rows.length; n += 1) {
     const r = rows[n]!;
-    const stored: StoredRow = [r.row, r.status, kind === "parts" ? encodeSpec(r.value as PartSpec) : r.value, r.changes];
+    const spec = r.value as PartSpec;
+    const stored: StoredRow =
+      kind === "parts"
+        ? [r.row, r.status, encodeSpec(spec), r.changes, [identityKey(spec.manufacturer), identityKey(spec.partNumber)]]
+        : [r.row, r.status, r.value, r.changes];
     yield [n, JSON.stringify(stored)];
   }
 }
@@ -383,12 +440,16 @@ function changeView(kind: IntakeKind, row: ComparedRowRecord): IntakeChangeView 
 export async function getIntake(id: string): Promise<IntakeDetail | null> {
   const intake = await selectIntake(id);
   if (!intake) return null;
-  const [problems, rows] = await Promise.all([
+  const [problems, rows, [notes]] = await Promise.all([
     db().sequelize.query<ProblemSql>(
       `SELECT row_number, column_name, value, message, severity FROM intake_problems WHERE intake_id = $1 ORDER BY position LIMIT ${DETAIL_LIMIT}`,
       { bind: [id], type: QueryTypes.SELECT },
     ),
     readStoredRows(intake),
+    db().sequelize.query<{ readings: IntakeReading[]; readings_not_listed: number; missing_parts: MissingPart[]; missing_count: number }>(
+      `SELECT readings, readings_not_listed, missing_parts, missing_count FROM intakes WHERE id = $1`,
+      { bind: [id], type: QueryTypes.SELECT },
+    ),
   ]);
   const shown = [...rows]
     .sort((a, b) => STATUS_ORDER[a.status] - STATUS_ORDER[b.status] || a.row - b.row)
@@ -400,6 +461,10 @@ export async function getIntake(id: string): Promise<IntakeDetail | null> {
     problemsTotal: intake.problem_count,
     changes: shown.map((r) => changeView(intake.kind, r)),
     changesTotal: rows.length,
+    readings: notes?.readings ?? [],
+    readingsNotListed: notes?.readings_not_listed ?? 0,
+    missingParts: notes?.missing_parts ?? [],
+    missingTotal: notes?.missing_count ?? 0,
   };
 }
 
@@ -434,12 +499,11 @@ async function markCommitted(intakeId: string, byUserId: string, counts: Compari
   );
 }
 
-/** Statuses found again at commit replace the preview's when the catalogue changed in between. */
-async function refreshStoredRows(intake: IntakeSql, preview: readonly ComparedRowRecord[], now: readonly ComparedRowRecord[], transaction: Transaction): Promise<void> {
-  const before = new Map(preview.map((r) => [r.row, `${r.status}${JSON.stringify(r.changes)}`]));
-  if (now.length === preview.length && now.every((r) => before.get(r.row) === `${r.status}${JSON.stringify(r.changes)}`)) return;
-  const parsedRows = await copyParsedRows(intake.kind, now, transaction);
-  await db().sequelize.query(`UPDATE intakes SET parsed_rows = ${parsedRows} WHERE id = $1`, { bind: [intake.id], transaction });
+/** A commit either writes exactly the previewed change set or is refused with why. */
+type CommitOutcome = { counts: Comparison["counts"] } | { stale: string };
+
+function staleMessage(row: ChangeSetRow): string {
+  return `The catalogue changed since this preview was made: ${row.value.partNumber} by ${row.value.manufacturer} (row ${row.row}) is no longer as the preview showed it, so a commit now would write a different change. Nothing was committed: preview the file again.`;
 }
 
 /** True when no commit, rollback or edit happened since the preview compared (the caller holds the catalogue lock). */
@@ -459,7 +523,8 @@ async function commitPreviewedParts(intake: IntakeSql, transaction: Transaction)
   );
   // The whole array becomes jsonb once, so each column's look-up does not parse its row's text again.
   const created = await insertPartsFromEncoded(
-    `(SELECT s.stored->2 AS spec FROM intakes i CROSS JOIN LATERAL jsonb_array_elements(i.parsed_rows::jsonb) AS s(stored)
+    `(SELECT s.stored->2 AS spec, s.stored->4->>0 AS manufacturer_key, s.stored->4->>1 AS part_number_key
+      FROM intakes i CROSS JOIN LATERAL jsonb_array_elements(i.parsed_rows::jsonb) AS s(stored)
       WHERE i.id = $1 AND s.stored->>1 = 'new') s`,
     [intake.id],
     "$1::uuid",
@@ -482,38 +547,21 @@ async function commitPreviewedParts(intake: IntakeSql, transaction: Transaction)
   return counts;
 }
 
-async function commitParts(intake: IntakeSql, byUserId: string, transaction: Transaction): Promise<Comparison["counts"]> {
-  if (await catalogueUnchangedSince(intake, transaction)) return commitPreviewedParts(intake, transaction);
-  const preview = await readStoredRows(intake, transaction);
-  // Compared again against the catalogue as it is now: it changed since the preview.
-  const comparison = await compareParts(
-    preview.map((r) => ({ row: r.row, value: r.value as PartSpec })),
-    transaction,
-  );
-  const created: Array<{ id: string; spec: PartSpec }> = [];
-  const changed: Array<{ id: string; spec: PartSpec }> = [];
-  const revisions: PartRevisionInsert[] = [];
-  for (const row of comparison.rows) {
-    const spec = row.value as PartSpec;
-    const key = partKey(spec.manufacturer, spec.partNumber);
-    const before = comparison.existing.get(key);
-    if (row.status === "new") {
-      created.push({ id: randomUUID(), spec });
-    } else if (row.status === "changed" && before) {
-      changed.push({ id: before.id, spec });
-      revisions.push({ partId: before.id, action: "intake", intakeId: intake.id, editorId: null, before: before.spec, after: spec });
-    }
+/**
+ * The catalogue moved since the preview (another commit, a rollback or an edit): the stored rows are compared with
+ * it again, and the commit goes ahead only when every row would make exactly the change the preview showed.
+ */
+async function commitParts(intake: IntakeSql, transaction: Transaction): Promise<CommitOutcome> {
+  if (!(await catalogueUnchangedSince(intake, transaction))) {
+    const preview = await readStoredRows(intake, transaction);
+    const now = await compareParts(
+      preview.map((r) => ({ row: r.row, value: r.value as PartSpec })),
+      transaction,
+    );
+    const changed = findChangedRow(preview, now.rows);
+    if (changed) return { stale: staleMessage(changed) };
   }
-  await insertParts(created, transaction);
-  await insertCreationRevisions(
-    created.map((c) => c.id),
-    intake.id,
-    transaction,
-  );
-  await updateParts(changed, transaction);
-  await insertPartRevisions(revisions, transaction);
-  await refreshStoredRows(intake, preview, comparison.rows, transaction);
-  return comparison.counts;
+  return { counts: await commitPreviewedParts(intake, transaction) };
 }
 
 const OFFER_COLUMNS: Array<[string, string]> = [
@@ -529,14 +577,15 @@ const OFFER_COLUMNS: Array<[string, string]> = [
   ["lead_time_days", "int4"],
   ["as_of", "date"],
   ["intake_id", "uuid"],
+  ["supplier_key", "text"],
 ];
 
-const OFFER_UPSERT = `ON CONFLICT (part_id, (lower(trim(supplier)))) DO UPDATE SET supplier = EXCLUDED.supplier, supplier_sku = EXCLUDED.supplier_sku,
+const OFFER_UPSERT = `ON CONFLICT (part_id, supplier_key) DO UPDATE SET supplier = EXCLUDED.supplier, supplier_sku = EXCLUDED.supplier_sku,
   stock = EXCLUDED.stock, minimum_order = EXCLUDED.minimum_order, order_multiple = EXCLUDED.order_multiple, price_breaks = EXCLUDED.price_breaks,
   currency = EXCLUDED.currency, lead_time_days = EXCLUDED.lead_time_days, as_of = EXCLUDED.as_of, intake_id = EXCLUDED.intake_id, updated_at = now()`;
 
 function offerCells(partId: string, offer: Offer, intakeId: string | null): unknown[] {
-  return [randomUUID(), partId, offer.supplier, offer.supplierSku, offer.stock, offer.minimumOrder, offer.orderMultiple, offer.priceBreaks, offer.currency, offer.leadTimeDays, offer.asOf, intakeId];
+  return [randomUUID(), partId, offer.supplier, offer.supplierSku, offer.stock, offer.minimumOrder, offer.orderMultiple, offer.priceBreaks, offer.currency, offer.leadTimeDays, offer.asOf, intakeId, identityKey(offer.supplier)];
 }
 
 async function upsertOffers(offers: ReadonlyArray<{ partId: string; offer: Offer; intakeId: string | null }>, transaction: Transaction): Promise<void> {
@@ -580,12 +629,14 @@ function withoutId(offer: (Offer & { id: string }) | null): Offer | null {
   return rest;
 }
 
-async function commitOffers(intake: IntakeSql, transaction: Transaction): Promise<Comparison["counts"]> {
+async function commitOffers(intake: IntakeSql, transaction: Transaction): Promise<CommitOutcome> {
   const preview = await readStoredRows(intake, transaction);
   const comparison = await compareOffers(
     preview.map((r) => ({ row: r.row, value: r.value as OfferRow })),
     transaction,
   );
+  const changed = findChangedRow(preview, comparison.rows);
+  if (changed) return { stale: staleMessage(changed) };
   const writes: Array<{ partId: string; offer: Offer; intakeId: string }> = [];
   const revisions: OfferRevisionInsert[] = [];
   for (const row of comparison.rows) {
@@ -597,8 +648,7 @@ async function commitOffers(intake: IntakeSql, transaction: Transaction): Promis
   }
   await upsertOffers(writes, transaction);
   await insertOfferRevisions(revisions, transaction);
-  await refreshStoredRows(intake, preview, comparison.rows, transaction);
-  return comparison.counts;
+  return { counts: comparison.counts };
 }
 
 /**
@@ -622,8 +672,9 @@ export async function commitIntake(id: string, byUserId: string, options: { send
         message: `Nothing to commit: no row of "${intake.file_name}" would add or change anything${intake.rejected_count > 0 ? ` (${intake.rejected_count} rejected)` : ""}.`,
       };
     }
-    const counts = intake.kind === "parts" ? await commitParts(intake, byUserId, transaction) : await commitOffers(intake, transaction);
-    await markCommitted(id, byUserId, counts, transaction);
+    const outcome = intake.kind === "parts" ? await commitParts(intake, transaction) : await commitOffers(intake, transaction);
+    if ("stale" in outcome) return { ok: false, code: "stale", message: outcome.stale };
+    await markCommitted(id, byUserId, outcome.counts, transaction);
     await bumpCatalogueVersion(transaction);
     return { ok: true, intake: toView((await selectIntake(id, transaction))!) };
   });
@@ -742,8 +793,8 @@ async function rollbackOffers(intake: IntakeSql, transaction: Transaction): Prom
   const removed = revisions.filter((r) => r.before === null);
   if (removed.length > 0) {
     await db().sequelize.query(
-      `DELETE FROM offers o USING unnest($1::uuid[], $2::text[]) AS d(part_id, supplier) WHERE o.part_id = d.part_id AND lower(trim(o.supplier)) = lower(trim(d.supplier))`,
-      { bind: [removed.map((r) => r.part_id), removed.map((r) => r.supplier)], transaction },
+      `DELETE FROM offers o USING unnest($1::uuid[], $2::text[]) AS d(part_id, supplier_key) WHERE o.part_id = d.part_id AND o.supplier_key = d.supplier_key`,
+      { bind: [removed.map((r) => r.part_id), removed.map((r) => identityKey(r.supplier))], transaction },
     );
   }
   const restored = revisions.filter((r): r is typeof r & { before: Offer } => r.before !== null);

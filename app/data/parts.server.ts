@@ -3,6 +3,8 @@ import { QueryTypes } from "sequelize";
 import { assessDataQuality, DEFAULT_STALE_AFTER_YEARS, type DataQualityFlag } from "#app/domain/data-quality.ts";
 import { worstCaseGain } from "#app/domain/gain-curve.ts";
 import { listPartChanges } from "#app/domain/intake/compare.ts";
+import { identityKey } from "#app/domain/intake/identity.ts";
+import { packageKey } from "#app/domain/intake/package-outlines.ts";
 import { LIFECYCLES, type CataloguePart, type GainPoint, type Offer, type PartSpec } from "#app/domain/part.ts";
 import { formatQuantity } from "#app/domain/quantity.ts";
 import type { PartListQuery } from "#app/lib/catalogue-query.ts";
@@ -45,7 +47,10 @@ export interface PartListRow {
   /** The datasheet's headline gain, e.g. "100–300 @ 2 mA". */
   hfeSummary: string;
   offerCount: number;
-  /** Lowest first-break unit price among the offers in the part's most offered currency (no conversion). */
+  /**
+   * Lowest first-break unit price in the list's currency (`priceCurrency`) when the part has an offer in it, else in
+   * the part's most offered currency. Amounts are never converted.
+   */
   bestUnitPrice: Money | null;
   stockTotal: number;
   flags: string[];
@@ -58,6 +63,8 @@ export interface PartList {
   pageSize: number;
   /** Every package name in the catalogue, for the filter UI. */
   packages: string[];
+  /** The currency prices are sorted in: the query's, else the one most offers are in. Parts without it sort after. */
+  priceCurrency: string | null;
 }
 
 export interface PartRevisionView {
@@ -86,6 +93,8 @@ interface CachedPart {
   hfeSummary: string;
   offerCount: number;
   bestUnitPrice: Money | null;
+  /** Lowest first-break unit price per currency. */
+  pricesByCurrency: Map<string, number>;
   stockTotal: number;
   flags: DataQualityFlag[];
 }
@@ -95,6 +104,8 @@ interface CatalogueCache {
   day: string;
   parts: CachedPart[];
   packages: string[];
+  /** The currency most offers are in. */
+  mainCurrency: string | null;
 }
 
 // The list reads a per-process copy of the catalogue keyed on catalogue_version (design section 10):
@@ -120,6 +131,9 @@ async function loadCatalogue(version: number): Promise<CatalogueCache> {
   }
   const day = today();
   const packages = new Set<string>();
+  const currencyCounts = new Map<string, number>();
+  for (const row of offerRows) currencyCounts.set(row.currency, (currencyCounts.get(row.currency) ?? 0) + 1);
+  const mainCurrency = [...currencyCounts.entries()].sort((a, b) => b[1] - a[1] || a[0].localeCompare(b[0]))[0]?.[0] ?? null;
   const parts = partRows.map((row): CachedPart => {
     const part = rowToPart(row);
     packages.add(part.packageName);
@@ -127,18 +141,19 @@ async function loadCatalogue(version: number): Promise<CatalogueCache> {
     const headline = headlineGain(part.gainPoints);
     return {
       part,
-      manufacturerLower: part.manufacturer.toLowerCase(),
-      partNumberLower: part.partNumber.toLowerCase(),
-      packageLower: part.packageName.trim().toLowerCase(),
+      manufacturerLower: identityKey(part.manufacturer),
+      partNumberLower: identityKey(part.partNumber),
+      packageLower: packageKey(part.packageName),
       headlineHfe: headline.value,
       hfeSummary: headline.summary,
       offerCount: offers.length,
       bestUnitPrice: bestPrice(offers),
+      pricesByCurrency: pricesByCurrency(offers),
       stockTotal: offers.reduce((sum, o) => sum + o.stock, 0),
       flags: assessDataQuality(part, { todayIso: day }).flags,
     };
   });
-  return { version, day, parts, packages: [...packages].sort((a, b) => a.localeCompare(b)) };
+  return { version, day, parts, packages: [...packages].sort((a, b) => a.localeCompare(b)), mainCurrency };
 }
 
 async function catalogue(): Promise<CatalogueCache> {
@@ -193,6 +208,23 @@ function bestPrice(offers: readonly Offer[]): Money | null {
   return top ? { amount: Math.min(...top[1]), currency: top[0] } : null;
 }
 
+function pricesByCurrency(offers: readonly Offer[]): Map<string, number> {
+  const prices = new Map<string, number>();
+  for (const offer of offers) {
+    const first = [...offer.priceBreaks].sort((a, b) => a.quantity - b.quantity)[0];
+    if (!first) continue;
+    const known = prices.get(offer.currency);
+    if (known === undefined || first.unitPrice < known) prices.set(offer.currency, first.unitPrice);
+  }
+  return prices;
+}
+
+/** The part's price to show and sort by: in the list's currency when it has one, else its most offered currency. */
+function priceIn(entry: CachedPart, currency: string | null): Money | null {
+  const amount = currency === null ? undefined : entry.pricesByCurrency.get(currency);
+  return amount === undefined ? entry.bestUnitPrice : { amount, currency: currency! };
+}
+
 function gainAt(part: CataloguePart, icAmps: number): number | null {
   const estimate = worstCaseGain(part.gainPoints, icAmps);
   return estimate.source === "none" ? null : estimate.hfe;
@@ -201,7 +233,8 @@ function gainAt(part: CataloguePart, icAmps: number): number | null {
 const within = (value: number | null, min: number | undefined, max: number | undefined) =>
   (min === undefined || (value !== null && value >= min)) && (max === undefined || (value !== null && value <= max));
 
-type SortKey = (entry: CachedPart, hfe: number | null) => string | number | null;
+type Key = string | number | ReadonlyArray<string | number>;
+type SortKey = (entry: CachedPart, hfe: number | null, currency: string | null) => Key | null;
 
 const LIFECYCLE_ORDER = new Map<string, number>(LIFECYCLES.map((l, i) => [l, i]));
 
@@ -216,15 +249,26 @@ const SORT_KEYS: Record<PartListQuery["sort"], SortKey> = {
   ft: (e) => e.part.ftHz,
   hfe: (e, hfe) => hfe ?? e.headlineHfe,
   lifecycle: (e) => LIFECYCLE_ORDER.get(e.part.lifecycle) ?? 99,
-  price: (e) => e.bestUnitPrice?.amount ?? null,
+  // Amounts in different currencies are never compared: the list's currency first, then each other currency apart.
+  price: (e, _hfe, currency) => {
+    const price = priceIn(e, currency);
+    if (!price) return null;
+    return price.currency === currency ? [0, "", price.amount] : [1, price.currency, price.amount];
+  },
 };
 
-// Plain code-unit order on lower-cased text: fast enough to sort a large catalogue on every uncached query.
-function compareKeys(a: string | number, b: string | number): number {
-  if (typeof a === "number" && typeof b === "number") return a - b;
-  const x = String(a);
-  const y = String(b);
-  return x < y ? -1 : x > y ? 1 : 0;
+// Plain code-unit order on identity keys: fast enough to sort a large catalogue on every uncached query.
+// A tuple key groups first (its leading parts, always ascending) and orders by its last part in the asked direction.
+function compareKeys(a: Key, b: Key, direction = 1): number {
+  if (Array.isArray(a) && Array.isArray(b)) {
+    for (let i = 0; i < a.length; i += 1) {
+      const order = compareKeys(a[i] as string | number, b[i] as string | number) * (i === a.length - 1 ? direction : 1);
+      if (order !== 0) return order;
+    }
+    return 0;
+  }
+  const order = typeof a === "number" && typeof b === "number" ? a - b : String(a) < String(b) ? -1 : String(a) > String(b) ? 1 : 0;
+  return order * direction;
 }
 
 interface Match {
@@ -242,9 +286,9 @@ function resultKey(query: PartListQuery): string {
   return JSON.stringify(filters);
 }
 
-function findMatches(parts: readonly CachedPart[], query: PartListQuery): Match[] {
-  const q = query.q?.toLowerCase();
-  const wantedPackages = new Set(query.package.map((p) => p.trim().toLowerCase()));
+function findMatches(parts: readonly CachedPart[], query: PartListQuery, currency: string | null): Match[] {
+  const q = query.q === undefined ? undefined : identityKey(query.q);
+  const wantedPackages = new Set(query.package.map((p) => packageKey(p)));
   const wantedLifecycles = new Set<string>(query.lifecycle);
   const hfeAt = query.hfeAt;
   const matches: Match[] = [];
@@ -265,12 +309,12 @@ function findMatches(parts: readonly CachedPart[], query: PartListQuery): Match[
   }
   const key = SORT_KEYS[query.sort];
   const direction = query.dir === "desc" ? -1 : 1;
-  const keyed = matches.map((match) => ({ match, key: key(match.entry, match.hfe) }));
+  const keyed = matches.map((match) => ({ match, key: key(match.entry, match.hfe, currency) }));
   keyed.sort((a, b) => {
     if (a.key === null || b.key === null) {
       if (a.key !== b.key) return a.key === null ? 1 : -1;
     } else {
-      const order = compareKeys(a.key, b.key) * direction;
+      const order = compareKeys(a.key, b.key, direction);
       if (order !== 0) return order;
     }
     return (
@@ -288,21 +332,22 @@ export async function listParts(query: PartListQuery): Promise<PartList> {
     results.clear();
     resultsVersion = current.version;
   }
+  const currency = query.currency ?? current.mainCurrency;
   const key = resultKey(query);
   let matches = results.get(key);
   if (matches) {
     results.delete(key);
   } else {
-    matches = findMatches(current.parts, query);
+    matches = findMatches(current.parts, query, currency);
     if (results.size >= RESULT_CACHE_SIZE) results.delete(results.keys().next().value!);
   }
   results.set(key, matches);
   const start = (query.page - 1) * query.size;
-  const rows = matches.slice(start, start + query.size).map(({ entry, hfe }) => toListRow(entry, hfe));
-  return { rows, total: matches.length, page: query.page, pageSize: query.size, packages: current.packages };
+  const rows = matches.slice(start, start + query.size).map(({ entry, hfe }) => toListRow(entry, hfe, currency));
+  return { rows, total: matches.length, page: query.page, pageSize: query.size, packages: current.packages, priceCurrency: currency };
 }
 
-function toListRow(entry: CachedPart, hfe: number | null): PartListRow {
+function toListRow(entry: CachedPart, hfe: number | null, currency: string | null): PartListRow {
   const { part } = entry;
   return {
     id: part.id,
@@ -319,7 +364,7 @@ function toListRow(entry: CachedPart, hfe: number | null): PartListRow {
     hfeAtChosen: hfe,
     hfeSummary: entry.hfeSummary,
     offerCount: entry.offerCount,
-    bestUnitPrice: entry.bestUnitPrice,
+    bestUnitPrice: priceIn(entry, currency),
     stockTotal: entry.stockTotal,
     flags: entry.flags,
   };
@@ -408,8 +453,8 @@ export async function updatePart(id: string, spec: PartSpec, editor: { id: strin
     const after = normaliseSpec(spec);
     if (listPartChanges(before, after).length === 0) return { ok: true as const };
     const [clash] = await sequelize.query<{ id: string }>(
-      `SELECT id FROM parts WHERE lower(trim(manufacturer)) = lower(trim($1)) AND lower(trim(part_number)) = lower(trim($2)) AND id <> $3`,
-      { bind: [after.manufacturer, after.partNumber, id], type: QueryTypes.SELECT, transaction },
+      `SELECT id FROM parts WHERE manufacturer_key = $1 AND part_number_key = $2 AND id <> $3`,
+      { bind: [identityKey(after.manufacturer), identityKey(after.partNumber), id], type: QueryTypes.SELECT, transaction },
     );
     if (clash) {
       return { ok: false as const, message: `The catalogue already has ${after.partNumber} by ${after.manufacturer}: a part is identified by manufacturer and part number.` };

@@ -1,6 +1,7 @@
 // The catalogue's view of one orderable device, as the engine reads it.
 // Every number carries its unit in its name; electrical values are SI base units
 // (volts, amperes, watts, hertz, farads, ohms), temperatures are degrees Celsius.
+import { identityKey } from "./intake/identity";
 
 export const POLARITIES = ["npn", "pnp"] as const;
 export type Polarity = (typeof POLARITIES)[number];
@@ -92,7 +93,7 @@ export interface Offer {
   asOf: string;
 }
 
-/** Identity rule for parts: manufacturer + part number, trimmed, case-insensitive. */
+/** Identity rule for parts: manufacturer + part number, compared as look-alike names (intake/identity.ts). */
 export function partKey(manufacturer: string, partNumber: string): string {
-  return `${manufacturer.trim().toLowerCase()}\u0000${partNumber.trim().toLowerCase()}`;
+  return `${identityKey(manufacturer)}\u0000${identityKey(partNumber)}`;
 }

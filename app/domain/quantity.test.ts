@@ -85,8 +85,8 @@ const rejected: Array<[string, Dimension, string]> = [
   ["5 V", "ratio", "a voltage (V) where a plain number is expected"],
   ["150 °C", "thermal-resistance", "a temperature (°C) where a thermal resistance is expected"],
   ["62.5 °C/W", "temperature", "a thermal resistance (°C/W) where a temperature is expected"],
-  ["1,000 V", "voltage", 'ambiguous: "1,000 V" may use a thousands separator or a decimal comma; write 1000 or 1.000'],
-  ["10,000", "ratio", 'ambiguous: "10,000" may use a thousands separator or a decimal comma; write 10000 or 10.000'],
+  ["1,000 V", "voltage", 'ambiguous: "1,000 V" is 1000 V if the comma groups digits, or 1 V if it is a decimal comma: write 1000 V or 1 V'],
+  ["10,000", "ratio", 'ambiguous: "10,000" is 10000 if the comma groups digits, or 10 if it is a decimal comma: write 10000 or 10'],
   ["1,000,000", "ratio", 'not a number: "1,000,000" (write numbers without thousands separators or spaces)'],
   ["1 000 V", "voltage", 'not a number: "1 000 V" (write numbers without thousands separators or spaces)'],
   ["1.000,5", "ratio", 'not a number: "1.000,5" (write numbers without thousands separators or spaces)'],
@@ -103,7 +103,7 @@ const rejected: Array<[string, Dimension, string]> = [
 
 describe("parseQuantity", () => {
   it.each(accepted)("reads %j as %s", (text, dimension, expected) => {
-    expect(parseQuantity(text, dimension)).toEqual({ ok: true, value: expected });
+    expect(parseQuantity(text, dimension)).toMatchObject({ ok: true, value: expected });
   });
 
   it.each(rejected)("rejects %j as %s", (text, dimension, reason) => {
@@ -112,6 +112,7 @@ describe("parseQuantity", () => {
 
   it("reads bare numbers in the header's unit, but a unit in the cell wins", () => {
     expect(parseQuantity("200", "current", { headerUnit: "mA" })).toEqual({ ok: true, value: 0.2 });
+    expect(parseQuantity("200", "current")).toEqual({ ok: true, value: 200, bare: true });
     expect(parseQuantity("1 A", "current", { headerUnit: "mA" })).toEqual({ ok: true, value: 1 });
     expect(parseQuantity("62.5", "thermal-resistance", { headerUnit: "K/W" })).toEqual({ ok: true, value: 62.5 });
     expect(parseQuantity("200", "current", { headerUnit: "mV" })).toEqual({
@@ -121,14 +122,48 @@ describe("parseQuantity", () => {
   });
 
   it("treats every comma as decimal when the file says so (semicolon-separated files)", () => {
-    expect(parseQuantity("1,000 V", "voltage", { decimalComma: true })).toEqual({ ok: true, value: 1 });
-    expect(parseQuantity("1,250", "power", { decimalComma: true })).toEqual({ ok: true, value: 1.25 });
+    expect(parseQuantity("1,000 V", "voltage", { decimalMark: "comma" })).toEqual({ ok: true, value: 1 });
+    expect(parseQuantity("1,250", "power", { decimalMark: "comma" })).toEqual({ ok: true, value: 1.25, bare: true });
+  });
+
+  // Issue item 11: in a decimal-comma file "1.000" may be one thousand (digit grouping) or one; never guess.
+  it.each([
+    ["1.000", 'ambiguous: "1.000" is 1000 if the dot groups digits, or 1 if it is a decimal point: write 1000 or 1'],
+    ["10.000", 'ambiguous: "10.000" is 10000 if the dot groups digits, or 10 if it is a decimal point: write 10000 or 10'],
+    ["24.000", 'ambiguous: "24.000" is 24000 if the dot groups digits, or 24 if it is a decimal point: write 24000 or 24'],
+    ["1.500 mA", 'ambiguous: "1.500 mA" is 1500 mA if the dot groups digits, or 1,5 mA if it is a decimal point: write 1500 mA or 1,5 mA'],
+    ["1.005mA", 'ambiguous: "1.005mA" is 1005mA if the dot groups digits, or 1,0050mA if it is a decimal point: write 1005mA or 1,0050mA'],
+  ])("refuses %j in a decimal-comma file, saying how to write it", (text, reason) => {
+    expect(parseQuantity(text, "current", { decimalMark: "comma" })).toEqual({ ok: false, reason });
+  });
+
+  it("reads a dot before other than three digits, or after a zero, as decimal in a decimal-comma file", () => {
+    expect(parseQuantity("0.500 V", "voltage", { decimalMark: "comma" })).toEqual({ ok: true, value: 0.5 });
+    expect(parseQuantity("1.5 mA", "current", { decimalMark: "comma" })).toEqual({ ok: true, value: 0.0015 });
+    expect(parseQuantity("1.0000", "ratio", { decimalMark: "comma" })).toEqual({ ok: true, value: 1, bare: true });
+  });
+
+  it("refuses both marks before three digits when the file's locale is unknown (tab files), and reads the rest", () => {
+    expect(parseQuantity("1,000", "ratio", { decimalMark: "either" })).toEqual({
+      ok: false,
+      reason: 'ambiguous: "1,000" is 1000 if the comma groups digits, or 1 if it is a decimal comma: write 1000 or 1',
+    });
+    expect(parseQuantity("2.500 V", "voltage", { decimalMark: "either" })).toEqual({
+      ok: false,
+      reason: 'ambiguous: "2.500 V" is 2500 V if the dot groups digits, or 2.5 V if it is a decimal point: write 2500 V or 2.5 V',
+    });
+    expect(parseQuantity("0,65 V", "voltage", { decimalMark: "either" })).toEqual({ ok: true, value: 0.65 });
+    expect(parseQuantity("0.65 V", "voltage", { decimalMark: "either" })).toEqual({ ok: true, value: 0.65 });
+  });
+
+  it("reads the Unicode minus sign (U+2212) as a minus", () => {
+    expect(parseQuantity("\u221255 °C", "temperature")).toEqual({ ok: true, value: -55 });
   });
 
   it("reads every plain decimal exactly as Number() does", () => {
     fc.assert(
       fc.property(fc.double({ min: -1e12, max: 1e12, noNaN: true, noDefaultInfinity: true }), (value) => {
-        const result = parseQuantity(String(value), "voltage");
+        const { bare: _bare, ...result } = parseQuantity(String(value), "voltage") as { ok: true; value: number; bare?: boolean };
         expect(result).toEqual({ ok: true, value: Object.is(value, -0) ? 0 : value });
       }),
     );

@@ -16,13 +16,21 @@ export const DIMENSIONS = [
 ] as const;
 export type Dimension = (typeof DIMENSIONS)[number];
 
-export type ParseResult = { ok: true; value: number } | { ok: false; reason: string };
+/** `bare` is true when neither the cell nor the header gave a unit (the SI base unit was assumed). */
+export type ParseResult = { ok: true; value: number; bare?: boolean } | { ok: false; reason: string };
+
+/**
+ * Which decimal mark the text around a number uses. `point`: a dot is decimal, and so is a comma unless it is
+ * followed by exactly three digits (which may be digit grouping). `comma`: the mirror image. `either`: both may
+ * be grouping, so a dot or a comma before exactly three digits is refused.
+ */
+export type DecimalMark = "point" | "comma" | "either";
 
 export interface ParseOptions {
   /** Unit given once for a whole column (e.g. from a `[mA]` header); a unit in the cell wins. */
   headerUnit?: string;
-  /** The cell comes from a semicolon-separated file, so a comma is always the decimal separator. */
-  decimalComma?: boolean;
+  /** The file's decimal mark (see DecimalMark); `point` when not given. */
+  decimalMark?: DecimalMark;
 }
 
 export interface FormatOptions {
@@ -136,12 +144,15 @@ const NUMBER_PATTERN = /^([+-]?)(\d*)(?:([.,])(\d*))?(?:[eE]([+-]?\d+))?\s*(.*)$
 const LETTER_POINT_PATTERN = /^([^\d\s.,])(\d+)(.*)$/s;
 const STARTS_WITH_DIGIT = /^[\d.,]/;
 const NON_ZERO_DIGIT = /[1-9]/;
+// U+2212 MINUS SIGN, as word processors and PDFs print negative values.
+const UNICODE_MINUS = "\u2212";
 
 /** Parses one cell as a quantity of the given dimension into SI base units (temperatures in °C). */
 export function parseQuantity(text: string, dimension: Dimension, options?: ParseOptions): ParseResult {
   const headerUnit = options?.headerUnit ?? "";
-  const decimalComma = options?.decimalComma === true;
-  const trimmed = text.trim();
+  const decimalMark = options?.decimalMark ?? "point";
+  const typed = text.trim();
+  const trimmed = typed.startsWith(UNICODE_MINUS) ? `-${typed.slice(1)}` : typed;
   if (trimmed === "") return fail("empty");
   const match = NUMBER_PATTERN.exec(trimmed);
   if (!match) return fail(`not a number: "${trimmed}"`);
@@ -169,11 +180,13 @@ export function parseQuantity(text: string, dimension: Dimension, options?: Pars
   if (STARTS_WITH_DIGIT.test(rest)) {
     return fail(`not a number: "${trimmed}" (write numbers without thousands separators or spaces)`);
   }
-  if (separator === "," && !decimalComma && fraction.length === 3 && NON_ZERO_DIGIT.test(integer)) {
-    return fail(`ambiguous: "${trimmed}" may use a thousands separator or a decimal comma; write ${integer}${fraction} or ${integer}.${fraction}`);
+  if (separator !== undefined && fraction.length === 3 && NON_ZERO_DIGIT.test(integer) && mayGroupDigits(separator, decimalMark)) {
+    const spaced = restRaw !== "" && /\s/.test(typed.charAt(typed.length - restRaw.length - 1));
+    return fail(ambiguousGrouping(typed, sign, integer, separator, fraction, `${spaced ? " " : ""}${restRaw.trim()}`, decimalMark));
   }
 
   let unitExponent: number;
+  const bare = rest === "" && headerUnit === "";
   if (rest === "") {
     if (headerUnit === "") {
       unitExponent = 0;
@@ -192,7 +205,25 @@ export function parseQuantity(text: string, dimension: Dimension, options?: Pars
   // Folding the prefix into the decimal exponent keeps the result correctly rounded (100 µA is exactly 1e-4).
   const value = Number(`${sign}${digits === "" ? "0" : digits}.${decimals === "" ? "0" : decimals}e${exponent}`);
   if (!Number.isFinite(value)) return fail(`out of range: "${trimmed}"`);
-  return { ok: true, value: value === 0 ? 0 : value };
+  return bare ? { ok: true, value: value === 0 ? 0 : value, bare } : { ok: true, value: value === 0 ? 0 : value };
+}
+
+// A dot or comma before exactly three digits may be digit grouping, unless the file's decimal mark is that character.
+function mayGroupDigits(separator: string, decimalMark: DecimalMark): boolean {
+  return decimalMark === "either" || (separator === "," ? decimalMark === "point" : decimalMark === "comma");
+}
+
+/** Says both readings of `1.500 mA` and how to write each so that it cannot be misread. */
+function ambiguousGrouping(typed: string, sign: string, integer: string, separator: string, fraction: string, unit: string, decimalMark: DecimalMark): string {
+  const mark = decimalMark === "comma" ? "," : ".";
+  const kept = fraction.replace(/0+$/, "");
+  // Three decimals again would be just as ambiguous, so a trailing zero keeps the decimal reading unmistakable.
+  const decimals = kept === "" ? "" : `${mark}${kept.length === 3 ? `${kept}0` : kept}`;
+  const grouped = `${sign}${integer}${fraction}${unit}`;
+  const decimal = `${sign}${integer}${decimals}${unit}`;
+  const what = separator === "." ? "dot" : "comma";
+  const asDecimal = separator === "." ? "a decimal point" : "a decimal comma";
+  return `ambiguous: "${typed}" is ${grouped} if the ${what} groups digits, or ${decimal} if it is ${asDecimal}: write ${grouped} or ${decimal}`;
 }
 
 /** Resolves a unit spelling (prefix included) to its decimal exponent for the dimension, or says why not. */

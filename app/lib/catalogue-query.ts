@@ -105,6 +105,16 @@ export const PartListQuerySchema = z
     hfeMax: numberParam("hfeMax"),
     lifecycle: many(choice(LIFECYCLES, "lifecycle")),
     hasOffers: z.preprocess(blankToUndefined, choice(["yes", "no"], "hasOffers").optional()),
+    // Prices sort and show in this currency; other currencies follow, each apart (amounts are never converted).
+    currency: z.preprocess(
+      blankToUndefined,
+      z
+        .string()
+        .trim()
+        .regex(/^[A-Za-z]{3}$/, { error: "currency must be a three-letter ISO 4217 code such as EUR" })
+        .transform((code) => code.toUpperCase())
+        .optional(),
+    ),
     cols: many(z.enum(PART_COLUMN_IDS as [string, ...string[]], { error: `cols must be among ${PART_COLUMN_IDS.join(", ")}` })),
   })
   .superRefine((query, ctx) => {
@@ -186,6 +196,7 @@ export function toSearchParams(query: Partial<PartListQuery>): URLSearchParams {
   if (query.hfeMax !== undefined) params.set("hfeMax", String(query.hfeMax));
   for (const l of query.lifecycle ?? []) params.append("lifecycle", l);
   if (query.hasOffers) params.set("hasOffers", query.hasOffers);
+  if (query.currency) params.set("currency", query.currency);
   for (const c of query.cols ?? []) params.append("cols", c);
   return params;
 }

@@ -13,6 +13,7 @@ import pg from "pg";
 import { from as copyFrom } from "pg-copy-streams";
 import { parsePartsFile } from "#app/domain/intake/parse-parts.ts";
 import { PART_FIELD_COLUMNS, normaliseSpec } from "#app/data/catalogue-store.server.ts";
+import { identityKey } from "#app/domain/intake/identity.ts";
 import { createMigrator, createSeeder } from "#db/migrator.ts";
 import { connect, databaseUrl, dropDatabase, ensureClusterUp, recreateDatabase } from "#tests/setup/databases.ts";
 import { generateCompactPartsCsv } from "#tests/setup/intake-helpers.ts";
@@ -70,10 +71,11 @@ async function main() {
   const client = new pg.Client({ connectionString: databaseUrl(DATABASE) });
   await client.connect();
   await client.query(`CREATE TABLE bench_parts_copy (LIKE parts INCLUDING ALL)`);
-  const columns = ["id", ...PART_FIELD_COLUMNS.map(([, column]) => column)];
+  // The same columns a commit writes, identity keys included.
+  const columns = ["id", "manufacturer_key", "part_number_key", ...PART_FIELD_COLUMNS.map(([, column]) => column)];
   const lines = function* () {
     for (const spec of rows) {
-      const cells = [randomUUID(), ...PART_FIELD_COLUMNS.map(([field, , type]) => copyText(spec[field], type))];
+      const cells = [randomUUID(), identityKey(spec.manufacturer), identityKey(spec.partNumber), ...PART_FIELD_COLUMNS.map(([field, , type]) => copyText(spec[field], type))];
       yield `${cells.join("\t")}\n`;
     }
   };

@@ -138,3 +138,34 @@ describe("GET /api/parts/:partId", () => {
     }
   });
 });
+
+describe("best-price sort across currencies (issue item 18)", () => {
+  it("never orders an amount in one currency against an amount in another", async () => {
+    const maker = "Tillbury Devices";
+    await commitParts(agent, "tillbury-parts.csv", ["TLB-1", "TLB-2", "TLB-3", "TLB-4"].map((n) => makeSpec(maker, n)));
+    const offer = (partNumber: string, currency: string, unitPrice: number) => ({
+      manufacturer: maker,
+      partNumber,
+      offer: makeOffer("Harbourline Stock", { currency, priceBreaks: [{ quantity: 1, unitPrice }] }),
+    });
+    const offers = await uploadIntake(
+      agent,
+      "offers",
+      "tillbury-offers.csv",
+      offersFile([offer("TLB-1", "EUR", 0.5), offer("TLB-2", "USD", 0.2), offer("TLB-3", "EUR", 0.3), offer("TLB-4", "USD", 0.1)]),
+    );
+    expect((await operate(agent, offers.body.id, "commit")).status).toBe(200);
+    const inEuro = await list({ q: "TLB-", sort: "price", currency: "EUR" });
+    expect(numbers(inEuro)).toEqual(["TLB-3", "TLB-1", "TLB-4", "TLB-2"]);
+    expect(inEuro).toMatchObject({ priceCurrency: "EUR" });
+    expect(inEuro.rows.map((r) => r.bestUnitPrice)).toEqual([
+      { amount: 0.3, currency: "EUR" },
+      { amount: 0.5, currency: "EUR" },
+      { amount: 0.1, currency: "USD" },
+      { amount: 0.2, currency: "USD" },
+    ]);
+    expect(numbers(await list({ q: "TLB-", sort: "price", currency: "usd" }))).toEqual(["TLB-4", "TLB-2", "TLB-3", "TLB-1"]);
+    // Descending keeps the chosen currency first; within each currency the amounts run high to low.
+    expect(numbers(await list({ q: "TLB-", sort: "price", dir: "desc", currency: "EUR" }))).toEqual(["TLB-1", "TLB-3", "TLB-2", "TLB-4"]);
+  });
+});

@@ -1,4 +1,4 @@
-// Every bad fixture through POST /api/intakes: the exact problems, and not one row written anywhere.
+// Every bad fixture through POST /api/intakes: the exact problems and readings, and not one row written anywhere.
 import type { Sequelize } from "sequelize";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { BAD_FIXTURE_EXPECTATIONS } from "#fixtures/intake/expectations.ts";
@@ -6,6 +6,7 @@ import { listIntakeFixtures, readIntakeFixture } from "#fixtures/intake/read-fix
 import { connect } from "../setup/databases.ts";
 import { newAgent, signIn, type Agent } from "../setup/http.ts";
 import { fingerprintCatalogue, LIBRARIAN, operate, uploadIntake } from "../setup/intake-helpers.ts";
+import { commitBadFixture } from "./support/intake-fixtures.ts";
 
 let agent: Agent;
 let sequelize: Sequelize;
@@ -36,6 +37,8 @@ function catalogueProblems(name: string) {
 describe("bad intake files over HTTP", () => {
   it.each(listIntakeFixtures("bad"))("%s: exact problems, nothing written", async (name) => {
     const expected = BAD_FIXTURE_EXPECTATIONS[name]!;
+    // An offers file names parts: those come from the parts fixture it requires, committed first.
+    if (expected.requires) await commitBadFixture(agent, expected.requires);
     const before = await fingerprintCatalogue(sequelize);
     const response = await uploadIntake(agent, expected.kind, name, readIntakeFixture("bad", name));
     expect(response.status).toBe(201);
@@ -43,6 +46,7 @@ describe("bad intake files over HTTP", () => {
     expect(problems).toEqual([...expected.problems, ...catalogueProblems(name)]);
     expect(response.body.problemsTotal).toBe(problems.length);
     expect(response.body.counts.warnings).toBe(expected.problems.filter((p) => p.severity === "warning").length);
+    expect(response.body.readings).toEqual(expected.readings ?? []);
 
     if (response.body.changesTotal === 0) {
       // Every row rejected (or the file refused): committing is refused and writes nothing.

@@ -58,6 +58,8 @@ const rows: Row[] = [
   { method: "GET", path: (ids) => `/intakes/${ids.intakeId}/file`, expect: pageFor(["librarian"]) },
   { method: "POST", path: "/intakes/new", expect: pageFor(["librarian"], 400) },
   { method: "POST", path: (ids) => `/intakes/${ids.intakeId}`, expect: pageFor(["librarian"], 400) },
+  // The demo's first intake rejected no row, so there is nothing to download (409), but only librarians learn that.
+  { method: "GET", path: (ids) => `/intakes/${ids.intakeId}/rejected`, expect: pageFor(["librarian"], 409) },
   { method: "GET", path: "/api/health", expect: everyone(200) },
   { method: "GET", path: "/api/parts", expect: signedInApi(200) },
   { method: "GET", path: "/api/parts?polarity=sideways", expect: signedInApi(400) },

@@ -42,7 +42,8 @@ fi
 (
   flock 9
   if ! bash docker-free-pg.sh status >/dev/null 2>&1; then touch "$runs_dir/started-cluster"; fi
-  bash docker-free-pg.sh up
+  # The server must not inherit the lock's descriptor, or the lock outlives this run.
+  bash docker-free-pg.sh up 9>&-
 ) 9>"$runs_dir/.lock"
 mark="$runs_dir/run-$$"
 echo $$ > "$mark"
@@ -58,7 +59,7 @@ cleanup() {
     done
     if [ -e "$runs_dir/started-cluster" ]; then
       rm -f "$runs_dir/started-cluster"
-      bash docker-free-pg.sh down || true
+      bash docker-free-pg.sh down 9>&- || true
     fi
   ) 9>"$runs_dir/.lock"
 }

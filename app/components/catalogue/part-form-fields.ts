@@ -20,11 +20,11 @@ const SAT = PARTS.groups.find((g) => g.prefix === "sat")!;
 
 /** Fixed fields of the form, by domain field name, in the order the intake format lists them. */
 export const PART_FIELDS: readonly ColumnSpec[] = PARTS.columns;
-export const GAIN_FIELDS: readonly ColumnSpec[] = GAIN.columns;
+export const GAIN_FIELDS: readonly ColumnSpec[] = GAIN.columns.filter((c) => !c.alternative);
 export const SATURATION_FIELDS: readonly ColumnSpec[] = SAT.columns;
 
 // A form is typed by hand, never in a semicolon locale: a comma is read like an intake's comma cell.
-const CONTEXT = { headerUnit: "", decimalComma: false };
+const CONTEXT = { headerUnit: "", decimalMark: "point" } as const;
 
 function showCell(spec: ColumnSpec, value: unknown): string {
   if (value === null || value === undefined) return "";
@@ -85,7 +85,11 @@ export function readPartForm(formData: FormData): PartFormResult {
     const out: Record<string, unknown> = {};
     for (const spec of specs) {
       const result = makeCellReader(spec, CONTEXT)(cells[spec.field] ?? "");
-      if (result.ok) out[spec.field] = result.value;
+      if (result.ok && result.value !== null && typeof result.value === "object") {
+        // "100-300" or "typ 200" typed into one field: the form has a field for each, so say where it goes.
+        fieldErrors[`${prefix}${spec.field}`] = `${result.reading ?? "not one value"}: put each value in its own field`;
+        out[spec.field] = null;
+      } else if (result.ok) out[spec.field] = result.value;
       else {
         fieldErrors[`${prefix}${spec.field}`] = result.message;
         out[spec.field] = null;

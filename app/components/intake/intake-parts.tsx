@@ -253,7 +253,7 @@ export function ChangeList({ changes, kind }: { changes: readonly RowChange[]; k
   );
 }
 
-export function BeforeAfter({ fields }: { fields: ReadonlyArray<{ field: string; before: unknown; after: unknown }> }) {
+export function BeforeAfter({ fields }: { fields: ReadonlyArray<{ field: string; before: unknown; after: unknown; cleared?: boolean }> }) {
   if (fields.length === 0) return <p className="px-3 py-2 text-sm text-ink/70">No field differs.</p>;
   return (
     <table className="w-full border-collapse text-sm">
@@ -279,7 +279,10 @@ export function BeforeAfter({ fields }: { fields: ReadonlyArray<{ field: string;
             <td className="px-1 py-1.5 text-ink/50" aria-label="becomes">
               →
             </td>
-            <td className="px-3 py-1.5">{formatFieldValue(f.field, f.after)}</td>
+            <td className="px-3 py-1.5" data-cleared={f.cleared ? "true" : undefined}>
+              {formatFieldValue(f.field, f.after)}
+              {f.cleared ? <span className="ml-2 rounded-sm bg-caution-soft px-1.5 text-xs font-medium text-caution">cleared by an empty cell</span> : null}
+            </td>
           </tr>
         ))}
       </tbody>

@@ -35,6 +35,22 @@ export interface FieldChange {
   field: string;
   before: unknown;
   after: unknown;
+  /** An empty cell in a column the file has cleared the value. */
+  cleared?: boolean;
+}
+
+export interface ReadingView {
+  column: string;
+  value: string;
+  reading: string;
+  count: number;
+  rows: number[];
+}
+
+export interface MissingPartView {
+  id: string;
+  manufacturer: string;
+  partNumber: string;
 }
 
 export interface RowChange {

@@ -1,12 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { checkHeaderUnit, makeCellReader } from "./cells";
+import type { DecimalMark } from "../quantity";
 import { INTAKE_FORMATS, type ColumnSpec } from "./columns";
 
 const spec = (name: string, group?: string): ColumnSpec => {
   const columns = group ? INTAKE_FORMATS.parts.groups.concat(INTAKE_FORMATS.offers.groups).find((g) => g.prefix === group)!.columns : [...INTAKE_FORMATS.parts.columns, ...INTAKE_FORMATS.offers.columns];
   return columns.find((c) => c.name === name)!;
 };
-const read = (name: string, cell: string, headerUnit = "", decimalComma = false) => makeCellReader(spec(name), { headerUnit, decimalComma })(cell);
+const read = (name: string, cell: string, headerUnit = "", decimalMark: DecimalMark = "point", group?: string) => makeCellReader(spec(name, group), { headerUnit, decimalMark })(cell);
 
 describe("makeCellReader", () => {
   it("reads empty cells as no value", () => {
@@ -17,11 +18,11 @@ describe("makeCellReader", () => {
   it("reads quantities in SI units, with the header's unit and the file's decimal comma", () => {
     expect(read("ic_max", "100 mA")).toEqual({ ok: true, value: 0.1 });
     expect(read("ic_max", "100", "mA")).toEqual({ ok: true, value: 0.1 });
-    expect(read("ic_max", "1,250", "", true)).toEqual({ ok: true, value: 1.25 });
+    expect(read("ic_max", "1,250", "", "comma")).toEqual({ ok: true, value: 1.25 });
   });
 
   it("returns the same result for a repeated cell (the column's cache)", () => {
-    const reader = makeCellReader(spec("vceo"), { headerUnit: "", decimalComma: false });
+    const reader = makeCellReader(spec("vceo"), { headerUnit: "", decimalMark: "point" });
     const first = reader("45 V");
     expect(reader("45 V")).toBe(first);
     expect(reader("45 mA")).toEqual({ ok: false, message: "a current (mA) where a voltage is expected" });
@@ -38,7 +39,7 @@ describe("makeCellReader", () => {
 
   it("reads choices in any case, with lifecycle aliases", () => {
     expect(read("polarity", "Pnp")).toEqual({ ok: true, value: "pnp" });
-    expect(read("lifecycle", "LTB")).toEqual({ ok: true, value: "last-time-buy" });
+    expect(read("lifecycle", "LTB")).toEqual({ ok: true, value: "last-time-buy", reading: "read as last-time-buy" });
     expect(read("polarity", "PNP-NPN")).toEqual({ ok: false, message: "polarity must be NPN or PNP" });
   });
 
@@ -71,5 +72,36 @@ describe("checkHeaderUnit", () => {
     expect(checkHeaderUnit(spec("ic_max"), "V")).toBe("column unit: a voltage (V) where a current is expected");
     expect(checkHeaderUnit(spec("stock"), "pcs")).toBe('stock takes no unit in the header (got "[pcs]")');
     expect(checkHeaderUnit(spec("ic", "gain"), "µA")).toBeNull();
+  });
+});
+
+describe("what people type (issue items 11 and 15)", () => {
+  it("reads digit grouping in whole-number columns in any file, and says so", () => {
+    expect(read("stock", "24.000", "", "comma")).toEqual({ ok: true, value: 24000, reading: "read as 24000 (digit grouping)" });
+    expect(read("stock", "12,000")).toEqual({ ok: true, value: 12000, reading: "read as 12000 (digit grouping)" });
+    expect(read("stock", "1.000.000", "", "either")).toEqual({ ok: true, value: 1000000, reading: "read as 1000000 (digit grouping)" });
+    expect(read("qty", "100+", "", "point", "break")).toEqual({ ok: true, value: 100, reading: "read as 100 (from 100 on)" });
+    expect(read("stock", "100+").ok).toBe(false);
+  });
+
+  it("reads n/a, - and dashes as an empty cell", () => {
+    for (const cell of ["n/a", "N/A", "-", "—", "–"]) expect(read("ft", cell)).toEqual({ ok: true, value: null, reading: "read as an empty cell" });
+  });
+
+  it("reads polarity letters and lifecycle words, with the reading", () => {
+    expect(read("polarity", "n")).toEqual({ ok: true, value: "npn", reading: "read as NPN" });
+    expect(read("lifecycle", "EOL")).toEqual({ ok: true, value: "obsolete", reading: "read as obsolete" });
+  });
+
+  it("reads the Unicode minus sign as a minus", () => {
+    expect(read("temp", "\u221255 °C", "", "point", "gain")).toEqual({ ok: true, value: -55, reading: "read as -55 °C (minus sign)" });
+  });
+
+  it("reads a price with its currency sign", () => {
+    expect(read("price", "€0,12", "", "point", "break")).toEqual({ ok: true, value: { kind: "money", amount: 0.12, sign: "€", currencies: ["EUR"] } });
+  });
+
+  it("reads back the apostrophe our rejected-rows download puts before formula-like cells", () => {
+    expect(read("vceo", "'-45 V")).toEqual({ ok: true, value: -45 });
   });
 });

@@ -2,6 +2,7 @@
 import Papa from "papaparse";
 import { CONFIGURATIONS, LIFECYCLES, PTOT_REFERENCES } from "../part";
 import { formatQuantity, unitSymbol, type Dimension } from "../quantity";
+import type { HfeRole } from "./hfe-notation";
 import type { IntakeKind } from "./problems";
 
 /** Uploads above this size are refused before parsing (HTTP 413). */
@@ -11,10 +12,14 @@ export const MAX_INTAKE_BYTES = 20 * 1024 * 1024;
 export const MAX_CELL_LENGTH = 500;
 
 export type CellType =
-  | { kind: "text" }
+  /** `clean`: names compared by identity (manufacturer, part number, supplier) or resolved to a package outline. */
+  | { kind: "text"; clean?: "name" | "package" }
   | { kind: "choice"; choices: readonly string[]; aliases?: Readonly<Record<string, string>> }
   | { kind: "quantity"; dimension: Dimension }
-  | { kind: "count" }
+  /** `fromOn`: a price-break quantity, where "100+" (from 100 on) is how suppliers write it. */
+  | { kind: "count"; fromOn?: boolean }
+  /** hFE: a number, or the datasheet's notation ("100-300", "≥ 100", "typ 200"); `role` is null for the `hfe` column. */
+  | { kind: "hfe"; role: HfeRole | null }
   | { kind: "amount" }
   | { kind: "currency" }
   | { kind: "url" }
@@ -39,6 +44,19 @@ export interface ColumnSpec {
   description: string;
   example: string;
   range?: PlausibleRange;
+  /**
+   * A number typed without a unit outside [min, max] (SI) is refused as a probable missing unit, suggesting `unit`:
+   * fT "300" reads as 300 Hz, which no transistor has.
+   */
+  bareHint?: BareNumberHint;
+  /** Another way to write other columns (the `hfe` column); left out of templates and exports. */
+  alternative?: boolean;
+}
+
+export interface BareNumberHint {
+  unit: string;
+  min?: number;
+  max?: number;
 }
 
 export interface ColumnGroupSpec {
@@ -66,8 +84,10 @@ const above = (max: number): PlausibleRange => ({ min: 0, minExclusive: true, ma
 const between = (min: number, max: number): PlausibleRange => ({ min, minExclusive: false, max });
 
 const text = { kind: "text" } as const;
+const name = { kind: "text", clean: "name" } as const;
 const quantity = (dimension: Dimension) => ({ kind: "quantity", dimension }) as const;
 const count = { kind: "count" } as const;
+const hfe = (role: HfeRole | null) => ({ kind: "hfe", role }) as const;
 
 function column(
   name: string,
@@ -78,24 +98,39 @@ function column(
   description: string,
   example: string,
   range?: PlausibleRange,
+  bareHint?: BareNumberHint,
 ): ColumnSpec {
-  return { name, label, field, type, required, description, example, range };
+  return { name, label, field, type, required, description, example, range, ...(bareHint ? { bareHint } : {}) };
 }
 
+// Words for the lifecycle states as datasheets and distributors print them. "EOL" (end of life) is read as obsolete,
+// the state an engineer must not design in; the preview shows that reading.
 const LIFECYCLE_ALIASES = {
   "not recommended for new designs": "nrnd",
   "last time buy": "last-time-buy",
   ltb: "last-time-buy",
+  eol: "obsolete",
+  "end of life": "obsolete",
+  "end-of-life": "obsolete",
+  discontinued: "obsolete",
 };
+
+const POLARITY_ALIASES = { n: "npn", p: "pnp" };
+
+// Bare numbers beyond these are taken for a missing prefix (common practice: discrete BJTs have fT from about 1 MHz
+// up and Cob in picofarads; a bare base-emitter or saturation voltage above its plausible range was meant in mV).
+const FT_HINT: BareNumberHint = { unit: "MHz", min: 1e5 };
+const COB_HINT: BareNumberHint = { unit: "pF", max: 1e-6 };
+const millivolts = (maxVolts: number): BareNumberHint => ({ unit: "mV", max: maxVolts });
 
 const PARTS_FORMAT: IntakeFormat = {
   kind: "parts",
   description: "Datasheet values, one row per part. A part is identified by manufacturer and part number.",
   columns: [
-    column("manufacturer", "manufacturer", "manufacturer", text, true, "Manufacturer's name as printed on the datasheet.", "Larkfield Semiconductor"),
-    column("part_number", "part number", "partNumber", text, true, "Orderable part number; with the manufacturer it identifies the part (trimmed, any case).", "LS-N100"),
-    column("polarity", "polarity", "polarity", { kind: "choice", choices: ["NPN", "PNP"] }, true, "NPN or PNP, any case.", "NPN"),
-    column("package", "package", "packageName", text, true, "Package outline, e.g. TO-92, SOT-23, TO-220.", "TO-92"),
+    column("manufacturer", "manufacturer", "manufacturer", name, true, "Manufacturer's name as printed on the datasheet.", "Larkfield Semiconductor"),
+    column("part_number", "part number", "partNumber", name, true, "Orderable part number; with the manufacturer it identifies the part (any case, spacing and look-alike characters).", "LS-N100"),
+    column("polarity", "polarity", "polarity", { kind: "choice", choices: ["NPN", "PNP"], aliases: POLARITY_ALIASES }, true, "NPN or PNP (N or P), any case.", "NPN"),
+    column("package", "package", "packageName", { kind: "text", clean: "package" }, true, "Package outline, e.g. TO-92, SOT-23, TO-220; TO92 and to 92 read as TO-92.", "TO-92"),
     column("configuration", "configuration", "configuration", { kind: "choice", choices: CONFIGURATIONS }, false, "single, darlington (Darlington pair in one package) or dual; single when empty.", "single"),
     column("vceo", "VCEO", "vceoVolts", quantity("voltage"), true, "Collector-emitter voltage rating, base open.", "45 V", above(3000)),
     column("vcbo", "VCBO", "vcboVolts", quantity("voltage"), false, "Collector-base voltage rating, emitter open.", "50 V", above(3000)),
@@ -106,11 +141,11 @@ const PARTS_FORMAT: IntakeFormat = {
     column("tj_max", "Tj max", "tjMaxC", quantity("temperature"), false, "Maximum junction temperature.", "150 °C", between(0, 300)),
     column("rth_ja", "Rth(j-a)", "rthJaCPerW", quantity("thermal-resistance"), false, "Thermal resistance junction to ambient; K/W is the same unit.", "250 °C/W", above(2000)),
     column("rth_jc", "Rth(j-c)", "rthJcCPerW", quantity("thermal-resistance"), false, "Thermal resistance junction to case.", "83.3 °C/W", above(500)),
-    column("vbe_on", "VBE(on)", "vbeOnVolts", quantity("voltage"), false, "Base-emitter voltage in the active region.", "0.65 V", above(5)),
-    column("ft", "fT", "ftHz", quantity("frequency"), false, "Transition frequency.", "250 MHz", above(100e9)),
-    column("cob", "Cob", "cobFarads", quantity("capacitance"), false, "Output capacitance, common base.", "4 pF", above(100e-9)),
+    column("vbe_on", "VBE(on)", "vbeOnVolts", quantity("voltage"), false, "Base-emitter voltage in the active region.", "0.65 V", above(5), millivolts(5)),
+    column("ft", "fT", "ftHz", quantity("frequency"), false, "Transition frequency; a bare number below 100 kHz is refused as a missing unit.", "250 MHz", above(100e9), FT_HINT),
+    column("cob", "Cob", "cobFarads", quantity("capacitance"), false, "Output capacitance, common base.", "4 pF", above(100e-9), COB_HINT),
     column("early_voltage", "Early voltage", "earlyVolts", quantity("voltage"), false, "Early voltage VA, when the datasheet or a model gives it.", "100 V", above(10_000)),
-    column("lifecycle", "lifecycle", "lifecycle", { kind: "choice", choices: LIFECYCLES, aliases: LIFECYCLE_ALIASES }, false, "active, nrnd, last-time-buy or obsolete; active when empty.", "active"),
+    column("lifecycle", "lifecycle", "lifecycle", { kind: "choice", choices: LIFECYCLES, aliases: LIFECYCLE_ALIASES }, false, "active, nrnd, last-time-buy or obsolete (LTB, EOL and discontinued are read as such); active when empty.", "active"),
     column("datasheet_url", "datasheet URL", "datasheetUrl", { kind: "url" }, false, "Link to the datasheet (http or https).", "https://example.com/datasheets/ls-n100.pdf"),
     column("datasheet_date", "datasheet date", "datasheetRevisionDate", { kind: "date" }, false, "Revision date of the datasheet, YYYY-MM-DD.", "2024-03-15"),
   ],
@@ -124,9 +159,10 @@ const PARTS_FORMAT: IntakeFormat = {
       columns: [
         column("ic", "IC", "icAmps", quantity("current"), true, "Collector current of the gain point.", "2 mA", above(1000)),
         column("vce", "VCE", "vceVolts", quantity("voltage"), false, "Collector-emitter voltage of the gain point.", "5 V", above(3000)),
-        column("hfe_min", "hFE min", "hfeMin", quantity("ratio"), false, "Minimum hFE (give at least one of min, typ, max).", "110", above(100_000)),
-        column("hfe_typ", "hFE typ", "hfeTyp", quantity("ratio"), false, "Typical hFE.", "250", above(100_000)),
-        column("hfe_max", "hFE max", "hfeMax", quantity("ratio"), false, "Maximum hFE.", "450", above(100_000)),
+        { ...column("hfe", "hFE", "hfe", hfe(null), false, "hFE as the datasheet prints it: a range 100-300, ≥ 100, typ 200 or ≤ 300 (instead of, or with, the three columns below).", "110-450"), alternative: true },
+        column("hfe_min", "hFE min", "hfeMin", hfe("hfeMin"), false, "Minimum hFE (give at least one of min, typ, max); a range 100-300 fills min and max.", "110", above(100_000)),
+        column("hfe_typ", "hFE typ", "hfeTyp", hfe("hfeTyp"), false, "Typical hFE.", "250", above(100_000)),
+        column("hfe_max", "hFE max", "hfeMax", hfe("hfeMax"), false, "Maximum hFE.", "450", above(100_000)),
         column("temp", "temperature", "tempC", quantity("temperature"), false, "Temperature of the gain point.", "25 °C", between(-100, 300)),
       ],
     },
@@ -139,9 +175,9 @@ const PARTS_FORMAT: IntakeFormat = {
       columns: [
         column("ic", "IC", "icAmps", quantity("current"), true, "Collector current of the saturation point.", "10 mA", above(1000)),
         column("ib", "IB", "ibAmps", quantity("current"), false, "Base current that forces saturation.", "0.5 mA", above(1000)),
-        column("vce_max", "VCE(sat) max", "vceSatMaxVolts", quantity("voltage"), false, "Maximum collector-emitter saturation voltage.", "250 mV", above(50)),
-        column("vce_typ", "VCE(sat) typ", "vceSatTypVolts", quantity("voltage"), false, "Typical collector-emitter saturation voltage.", "90 mV", above(50)),
-        column("vbe", "VBE(sat)", "vbeSatVolts", quantity("voltage"), false, "Base-emitter saturation voltage.", "0.75 V", above(10)),
+        column("vce_max", "VCE(sat) max", "vceSatMaxVolts", quantity("voltage"), false, "Maximum collector-emitter saturation voltage.", "250 mV", above(50), millivolts(50)),
+        column("vce_typ", "VCE(sat) typ", "vceSatTypVolts", quantity("voltage"), false, "Typical collector-emitter saturation voltage.", "90 mV", above(50), millivolts(50)),
+        column("vbe", "VBE(sat)", "vbeSatVolts", quantity("voltage"), false, "Base-emitter saturation voltage.", "0.75 V", above(10), millivolts(10)),
       ],
     },
   ],
@@ -151,11 +187,11 @@ const OFFERS_FORMAT: IntakeFormat = {
   kind: "offers",
   description: "Stock and prices, one row per part and supplier. The part must already be in the catalogue.",
   columns: [
-    column("manufacturer", "manufacturer", "manufacturer", text, true, "Manufacturer of a catalogue part (trimmed, any case).", "Larkfield Semiconductor"),
-    column("part_number", "part number", "partNumber", text, true, "Part number of a catalogue part (trimmed, any case).", "LS-N100"),
-    column("supplier", "supplier", "supplier", text, true, "Supplier's name.", "Harbour Components"),
+    column("manufacturer", "manufacturer", "manufacturer", name, true, "Manufacturer of a catalogue part (any case and spacing).", "Larkfield Semiconductor"),
+    column("part_number", "part number", "partNumber", name, true, "Part number of a catalogue part (any case and spacing).", "LS-N100"),
+    column("supplier", "supplier", "supplier", name, true, "Supplier's name; one offer per part and supplier.", "Harbour Components"),
     column("supplier_sku", "supplier SKU", "supplierSku", text, false, "Supplier's own order code.", "HC-448120"),
-    column("stock", "stock", "stock", count, true, "Units in stock, a whole number.", "12000", between(0, 1e9)),
+    column("stock", "stock", "stock", count, true, "Units in stock, a whole number; digit grouping (12.000 or 12,000) is read.", "12000", between(0, 1e9)),
     column("minimum_order", "minimum order", "minimumOrder", count, false, "Smallest order quantity; 1 when empty.", "10", between(1, 1e9)),
     column("order_multiple", "order multiple", "orderMultiple", count, false, "Orders must be a multiple of this; 1 when empty.", "10", between(1, 1e9)),
     column("currency", "currency", "currency", { kind: "currency" }, true, "ISO 4217 code of the prices.", "EUR"),
@@ -170,8 +206,8 @@ const OFFERS_FORMAT: IntakeFormat = {
       required: true,
       description: "Unit price from a quantity on; repeat as break2_*, break3_* for more quantities.",
       columns: [
-        column("qty", "quantity", "quantity", count, true, "Quantity from which the price applies.", "10", between(1, 1e9)),
-        column("price", "price", "unitPrice", { kind: "amount" }, true, "Unit price in the row's currency.", "0.085", between(0, 1e6)),
+        column("qty", "quantity", "quantity", { kind: "count", fromOn: true }, true, "Quantity from which the price applies; 10+ is read as 10.", "10", between(1, 1e9)),
+        column("price", "price", "unitPrice", { kind: "amount" }, true, "Unit price in the row's currency; a sign or code (€0,12, 0.12 USD) must agree with the currency column, or fills it when empty.", "0.085", between(0, 1e6)),
       ],
     },
   ],
@@ -231,7 +267,9 @@ function describeType(type: CellType): string {
     case "quantity":
       return type.dimension === "ratio" ? "number" : type.dimension.replace("-", " ");
     case "count":
-      return "whole number";
+      return type.fromOn ? "whole number (10+ allowed)" : "whole number";
+    case "hfe":
+      return type.role === null ? "range 100-300, ≥ 100, typ 200 or ≤ 300" : "number, or a range 100-300";
     case "amount":
       return "decimal number";
     case "currency":
@@ -262,7 +300,7 @@ export function templateCsv(kind: IntakeKind): string {
   const fields = format.columns.map((c) => c.name);
   const example = format.columns.map((c) => c.example);
   for (const group of format.groups) {
-    for (const c of group.columns) {
+    for (const c of group.columns.filter((column) => !column.alternative)) {
       fields.push(groupColumnName(group, 1, c));
       example.push(c.example);
     }

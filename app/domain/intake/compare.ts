@@ -1,5 +1,6 @@
 // Sorts an intake's rows against the catalogue into new, changed and unchanged parts, with each change.
 import { partKey, type GainPoint, type PartSpec, type SaturationPoint } from "../part";
+import { mergePartSpec } from "./merge";
 import type { OfferRow } from "./offer-schema";
 import { cellProblem, countRejectedRows, type IntakeProblem, type IntakeRow } from "./problems";
 
@@ -9,6 +10,8 @@ export interface FieldChange {
   field: keyof PartSpec;
   before: PartSpec[keyof PartSpec];
   after: PartSpec[keyof PartSpec];
+  /** The file's cell was empty, so the value is cleared (or back to its default). */
+  cleared?: true;
 }
 
 export interface ComparedRow {
@@ -34,22 +37,33 @@ export interface CatalogueComparison {
 
 const POINT_LISTS = new Set<keyof PartSpec>(["gainPoints", "saturationPoints"]);
 
-/** Classifies accepted rows against the catalogue; `problems` (from the parse) gives the rejected count. */
+/**
+ * Classifies accepted rows against the catalogue; `problems` (from the parse) gives the rejected count.
+ * With `present` (the file's columns) a row is merged into the catalogue's part first, so absent columns stay.
+ */
 export function compareWithCatalogue(
   rows: ReadonlyArray<IntakeRow<PartSpec>>,
   existing: ReadonlyMap<string, PartSpec>,
   problems: readonly IntakeProblem[] = [],
+  present?: ReadonlySet<string>,
 ): CatalogueComparison {
   const counts: IntakeCounts = { new: 0, changed: 0, unchanged: 0, rejected: countRejectedRows(problems) };
-  const compared = rows.map(({ row, value }): ComparedRow => {
-    const key = partKey(value.manufacturer, value.partNumber);
+  const compared = rows.map(({ row, value: incoming, empty }): ComparedRow => {
+    const key = partKey(incoming.manufacturer, incoming.partNumber);
     const before = existing.get(key);
-    const changes = before ? listPartChanges(before, value) : [];
+    const value = before && present ? mergePartSpec(before, incoming, present) : incoming;
+    const changes = before ? markCleared(listPartChanges(before, value), empty) : [];
     const status: ChangeStatus = !before ? "new" : changes.length > 0 ? "changed" : "unchanged";
     counts[status] += 1;
     return { row, partKey: key, value, status, changes };
   });
   return { rows: compared, counts };
+}
+
+/** Marks the changes an empty cell made; `empty` lists the fields whose cells were empty in the row. */
+export function markCleared<C extends { field: string }>(changes: C[], empty: readonly string[] | undefined): Array<C & { cleared?: true }> {
+  if (!empty || empty.length === 0) return changes;
+  return changes.map((change) => (empty.includes(change.field) ? { ...change, cleared: true as const } : change));
 }
 
 /** Every field that differs; gain and saturation points are compared as whole lists, in IC order. */

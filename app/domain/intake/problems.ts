@@ -1,4 +1,5 @@
 // What an intake reports about a file: one entry per bad cell, row, column or file.
+import type { IntakeReading } from "./readings";
 
 export type IntakeKind = "parts" | "offers";
 
@@ -16,12 +17,22 @@ export interface IntakeProblem {
 export interface IntakeRow<V> {
   row: number;
   value: V;
+  /** Fields whose column is in the file but whose cell was empty: a re-import clears them (absent columns do not). */
+  empty?: string[];
 }
 
 export interface IntakeParseResult<K extends IntakeKind, V> {
   kind: K;
   rows: Array<IntakeRow<V>>;
   problems: IntakeProblem[];
+  /** How cells of accepted rows were read when not taken literally. */
+  readings: IntakeReading[];
+  /** Cells read in ways past the listed readings' cap. */
+  readingsNotListed: number;
+  /** Fields the file has a column for; the others stay as the catalogue has them (`gainPoints.tempC` for a point's field). */
+  presentFields: string[];
+  /** Identity keys of every row that named its part (or offer), accepted or not. */
+  identities: string[];
 }
 
 const SHOWN_VALUE_LENGTH = 80;

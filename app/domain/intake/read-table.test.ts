@@ -5,7 +5,9 @@ import { normaliseHeaderCell, readTable, sniffDelimiter, type TableRecord } from
 const encode = (text: string) => new TextEncoder().encode(text);
 const records = (text: string) => {
   const seen: TableRecord[] = [];
-  readTable(encode(text), INTAKE_FORMATS.offers).eachRecord((record) => seen.push(record));
+  readTable(encode(text), INTAKE_FORMATS.offers).eachRecord((record) => {
+    seen.push(record);
+  });
   return seen;
 };
 const OFFERS_HEADER = "manufacturer,part_number,supplier,stock,currency,as_of,break1_qty,break1_price";

@@ -1,12 +1,14 @@
 // From uploaded bytes to records and a header mapped onto a format's columns, with file-level problems.
 import Papa from "papaparse";
+import type { DecimalMark } from "../quantity";
 import { checkHeaderUnit, makeCellReader, type CellReader } from "./cells";
 import { groupColumnName, type ColumnGroupSpec, type ColumnSpec, type IntakeFormat } from "./columns";
 import { decodeIntakeBytes } from "./decode";
+import { DELIMITERS, numberStyleOf, type Delimiter } from "./number-style";
 import { cellProblem, fileProblem, type IntakeKind, type IntakeProblem } from "./problems";
+import type { CellReading } from "./readings";
 
-export const DELIMITERS = [",", ";", "\t", "|"] as const;
-export type Delimiter = (typeof DELIMITERS)[number];
+export { DELIMITERS, type Delimiter } from "./number-style";
 
 export interface MappedColumn {
   /** Position in each record. */
@@ -35,12 +37,18 @@ export interface Table {
   headerWidth: number;
   columns: MappedColumn[];
   problems: IntakeProblem[];
-  /** Visits every non-blank record after the header, in order, without holding them all in memory. */
-  eachRecord: (visit: (record: TableRecord) => void) => void;
+  /** How header cells were read when not literally (`vceo (V)` as the unit V). */
+  headerReadings: CellReading[];
+  /** Visits every non-blank record after the header, in order, without holding them all in memory; `false` stops. */
+  eachRecord: (visit: (record: TableRecord) => boolean | void) => void;
 }
 
 const GROUP_NAME_PATTERN = /^([a-z]+)(\d+)_(.+)$/;
 const HEADER_UNIT_PATTERN = /^(.*?)\s*\[([^\]]*)\]$/;
+// "vceo (V)" as people write units in headers; tried only when the name before it is a known column.
+const HEADER_PAREN_UNIT_PATTERN = /^(.*?)\s*\(([^)]*)\)$/;
+// The column our rejected-rows download adds: ignored on the way back in.
+const PROBLEMS_COLUMN = "problems";
 const QUOTE_MESSAGES: Readonly<Record<string, string>> = {
   MissingQuotes: "a quoted cell starting on this row is never closed, so the rest of the file ran into it: a closing double quote is missing",
   InvalidQuotes: "a double quote inside a quoted cell must be doubled (\"\")",
@@ -48,7 +56,7 @@ const QUOTE_MESSAGES: Readonly<Record<string, string>> = {
 
 /** Decodes a file and maps its header onto a format; the records are streamed by `eachRecord`. */
 export function readTable(bytes: Uint8Array, format: IntakeFormat): Table {
-  const refused = (problems: IntakeProblem[]): Table => ({ ok: false, delimiter: ",", headerWidth: 0, columns: [], problems, eachRecord: () => {} });
+  const refused = (problems: IntakeProblem[]): Table => ({ ok: false, delimiter: ",", headerWidth: 0, columns: [], problems, headerReadings: [], eachRecord: () => {} });
   const decoded = decodeIntakeBytes(bytes);
   if (!decoded.ok) return refused([decoded.problem]);
   const text = decoded.text;
@@ -57,23 +65,23 @@ export function readTable(bytes: Uint8Array, format: IntakeFormat): Table {
   const options = { delimiter, header: false, skipEmptyLines: false, quoteChar: '"' } as const;
   const headerCells = Papa.parse<string[]>(text, { ...options, preview: 1 }).data[0] ?? [];
   const problems: IntakeProblem[] = [];
-  const header = mapHeader(headerCells, format, delimiter === ";", problems);
+  const header = mapHeader(headerCells, format, numberStyleOf(delimiter).decimalMark, problems);
   if (header.fatal) return refused(problems);
 
-  const eachRecord = (visit: (record: TableRecord) => void) => {
+  const eachRecord = (visit: (record: TableRecord) => boolean | void) => {
     let index = 0;
     Papa.parse<string[]>(text, {
       ...options,
-      step: (result) => {
+      step: (result, parser) => {
         index += 1;
         const cells = result.data;
         if (index === 1 || cells.every((cell) => cell.trim() === "")) return;
         const quoteError = result.errors.find((e) => QUOTE_MESSAGES[e.code] !== undefined);
-        visit({ row: index, cells, quoteProblem: quoteError ? QUOTE_MESSAGES[quoteError.code] : null });
+        if (visit({ row: index, cells, quoteProblem: quoteError ? QUOTE_MESSAGES[quoteError.code] : null }) === false) parser.abort();
       },
     });
   };
-  return { ok: true, delimiter, headerWidth: headerCells.length, columns: header.columns, problems, eachRecord };
+  return { ok: true, delimiter, headerWidth: headerCells.length, columns: header.columns, problems, headerReadings: header.readings, eachRecord };
 }
 
 // Column names never contain a delimiter, so the header line alone tells which one the file uses.
@@ -91,22 +99,31 @@ export function sniffDelimiter(text: string): Delimiter {
   return best;
 }
 
+const columnName = (text: string) => text.trim().toLowerCase().replace(/[\s-]+/g, "_");
+
 /** Trims, lower-cases, turns spaces and hyphens into `_`, and splits off a `[unit]`. */
 export function normaliseHeaderCell(cell: string): { name: string; unit: string | null } {
   const trimmed = cell.trim();
   const match = HEADER_UNIT_PATTERN.exec(trimmed);
   const rawName = match ? match[1] : trimmed;
   const unit = match && match[2].trim() !== "" ? match[2].trim() : null;
-  return { name: rawName.trim().toLowerCase().replace(/[\s-]+/g, "_"), unit };
+  return { name: columnName(rawName), unit };
+}
+
+/** A `(unit)` after a name, as in "vceo (V)": the name and unit, or null when the cell has none. */
+export function splitParenthesisedUnit(cell: string): { name: string; unit: string } | null {
+  const match = HEADER_PAREN_UNIT_PATTERN.exec(cell.trim());
+  return match && match[2].trim() !== "" ? { name: columnName(match[1]), unit: match[2].trim() } : null;
 }
 
 function mapHeader(
   cells: string[],
   format: IntakeFormat,
-  decimalComma: boolean,
+  decimalMark: DecimalMark,
   problems: IntakeProblem[],
-): { fatal: boolean; columns: MappedColumn[] } {
+): { fatal: boolean; columns: MappedColumn[]; readings: CellReading[] } {
   const fixed = new Map(format.columns.map((c) => [c.name, c]));
+  const readings: CellReading[] = [];
   const groups = new Map(format.groups.map((g) => [g.prefix, g]));
   const seen = new Map<string, number>();
   const columns: MappedColumn[] = [];
@@ -114,9 +131,16 @@ function mapHeader(
   let fatal = false;
 
   cells.forEach((cell, index) => {
-    const { name: rawName, unit } = normaliseHeaderCell(cell);
-    if (rawName === "") return;
-    const located = locateColumn(rawName, fixed, groups);
+    let { name: rawName, unit } = normaliseHeaderCell(cell);
+    if (rawName === "" || rawName === PROBLEMS_COLUMN) return;
+    let located = locateColumn(rawName, fixed, groups);
+    const parenthesised = located || unit !== null ? null : splitParenthesisedUnit(cell);
+    const inParentheses = parenthesised ? locateColumn(parenthesised.name, fixed, groups) : null;
+    if (parenthesised && inParentheses) {
+      ({ name: rawName, unit } = parenthesised);
+      located = inParentheses;
+      readings.push({ column: rawName, value: cell.trim(), reading: `read as "${rawName} [${unit}]": the column's unit is ${unit}` });
+    }
     if (!located) {
       unknown.push(rawName);
       problems.push(cellProblem(1, rawName, cell.trim(), `unknown column "${rawName}" is ignored`, "warning"));
@@ -139,7 +163,7 @@ function mapHeader(
         return;
       }
     }
-    columns.push({ index, name, spec, group, pointNumber, read: makeCellReader(spec, { headerUnit: unit ?? "", decimalComma }) });
+    columns.push({ index, name, spec, group, pointNumber, read: makeCellReader(spec, { headerUnit: unit ?? "", decimalMark }) });
   });
 
   const missing = listMissingColumns(format, seen);
@@ -156,7 +180,7 @@ function mapHeader(
       problems.push(fileProblem(`Missing required columns: ${missing.join(", ")}.`));
     }
   }
-  return { fatal, columns };
+  return { fatal, columns, readings };
 }
 
 function locateColumn(

@@ -55,7 +55,8 @@ const partSpec: fc.Arbitrary<PartSpec> = fc
     gainPoints: fc.array(gainPoint, { minLength: 1, maxLength: 4 }),
     saturationPoints: fc.array(saturationPoint, { maxLength: 3 }),
     vbeOnVolts: maybe(positive(5)),
-    ftHz: maybe(positive(100e9)),
+    // A bare fT below 100 kHz is refused as a missing unit, so the catalogue never holds one.
+    ftHz: maybe(fc.double({ min: 1e5, max: 100e9, noNaN: true })),
     cobFarads: maybe(positive(100e-9)),
     earlyVolts: maybe(positive(10_000)),
     lifecycle: fc.constantFrom(...LIFECYCLES),
@@ -89,7 +90,8 @@ describe("writePartsCsv", () => {
     fc.assert(
       fc.property(fc.uniqueArray(partSpec, { minLength: 1, maxLength: 8, selector: (p) => partKey(p.manufacturer, p.partNumber) }), (parts) => {
         const result = parsePartsFile(encode(writePartsCsv(parts)));
-        expect(result.problems).toEqual([]);
+        // Plausibility warnings (random values) do not reject a row; only errors would break the round trip.
+        expect(result.problems.filter((p) => p.severity === "error")).toEqual([]);
         expect(result.rows.map((r) => r.value)).toEqual(parts);
         expect(result.rows.map((r) => r.row)).toEqual(parts.map((_, i) => i + 2));
       }),
@@ -115,7 +117,8 @@ describe("writeOffersCsv", () => {
     fc.assert(
       fc.property(fc.uniqueArray(offerRow, { minLength: 1, maxLength: 8, selector: (o) => `${partKey(o.manufacturer, o.partNumber)}|${o.offer.supplier.toLowerCase()}` }), (rows) => {
         const result = parseOffersFile(encode(writeOffersCsv(rows)));
-        expect(result.problems).toEqual([]);
+        // Plausibility warnings (random values) do not reject a row; only errors would break the round trip.
+        expect(result.problems.filter((p) => p.severity === "error")).toEqual([]);
         expect(result.rows.map((r) => r.value)).toEqual(rows);
       }),
       { numRuns: 200 },

@@ -24,14 +24,15 @@ export function writeOffersCsv(rows: ReadonlyArray<{ manufacturer: string; partN
 function writeRows(format: IntakeFormat, rows: Array<{ fields: Values; points: Values }>): string {
   const header = format.columns.map((c) => c.name);
   const pointCounts = format.groups.map((g) => Math.max(0, ...rows.map((r) => (r.points[g.field] as unknown[]).length)));
+  const written = format.groups.map((group) => group.columns.filter((c) => !c.alternative));
   format.groups.forEach((group, g) => {
-    for (let n = 1; n <= pointCounts[g]; n += 1) for (const c of group.columns) header.push(groupColumnName(group, n, c));
+    for (let n = 1; n <= pointCounts[g]; n += 1) for (const c of written[g]) header.push(groupColumnName(group, n, c));
   });
   const data = rows.map(({ fields, points }) => {
     const cells = format.columns.map((c) => writeCell(c, fields[c.field]));
     format.groups.forEach((group, g) => {
       const list = points[group.field] as Values[];
-      for (let n = 0; n < pointCounts[g]; n += 1) for (const c of group.columns) cells.push(writeCell(c, list[n]?.[c.field]));
+      for (let n = 0; n < pointCounts[g]; n += 1) for (const c of written[g]) cells.push(writeCell(c, list[n]?.[c.field]));
     });
     return cells;
   });

@@ -6,7 +6,7 @@ import { requireRole } from "#app/lib/auth.server.ts";
 
 const ParamsSchema = z.object({ intakeId: z.uuid(), operation: z.enum(["commit", "discard", "rollback"]) });
 
-const STATUS = { "not-found": 404, "wrong-state": 409, blocked: 409 } as const;
+const STATUS = { "not-found": 404, "wrong-state": 409, blocked: 409, stale: 409 } as const;
 
 export const loader = methodNotAllowed(["POST"]);
 

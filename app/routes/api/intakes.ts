@@ -12,9 +12,13 @@ const UploadSchema = z.object({
   file: z.instanceof(File, { error: "file is required: attach the CSV file" }),
 });
 
+const PageSchema = z.object({ page: z.coerce.number({ error: "page must be a whole number" }).int({ error: "page must be a whole number" }).min(1, { error: "page must be at least 1" }).default(1) });
+
 export const loader = apiHandler(async ({ request }: Route.LoaderArgs) => {
   await requireRole(request, "librarian");
-  return Response.json({ intakes: await listIntakes() });
+  const query = PageSchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+  if (!query.success) return apiError(400, "invalid-query", "The intakes list takes page (1, 2, ...).", toFieldErrors(query.error));
+  return Response.json(await listIntakes(query.data.page));
 });
 
 const refuseMethod = methodNotAllowed(["GET", "POST"]);

@@ -3,6 +3,8 @@ import type { Route } from "./+types/formats";
 import { FormatTable } from "#app/components/intake/format-docs.tsx";
 import { formatBytes } from "#app/components/ui/format.ts";
 import { INTAKE_FORMATS, listColumnDocs, MAX_CELL_LENGTH, MAX_INTAKE_BYTES } from "#app/domain/intake/columns.ts";
+import { NUMBER_STYLES, WHOLE_NUMBER_RULE } from "#app/domain/intake/number-style.ts";
+import { MAX_PROBLEMS } from "#app/domain/intake/problem-cap.ts";
 import { requireRole } from "#app/lib/auth.server.ts";
 
 export async function loader({ request }: Route.LoaderArgs) {
@@ -11,6 +13,10 @@ export async function loader({ request }: Route.LoaderArgs) {
     formats: (["parts", "offers"] as const).map((kind) => ({ kind, description: INTAKE_FORMATS[kind].description, columns: listColumnDocs(kind) })),
     maxBytes: MAX_INTAKE_BYTES,
     maxCellLength: MAX_CELL_LENGTH,
+    maxProblems: MAX_PROBLEMS,
+    // The same table the cell readers use, so this page and the code cannot disagree.
+    numberStyles: NUMBER_STYLES.map(({ files, rule }) => ({ files, rule })),
+    wholeNumberRule: WHOLE_NUMBER_RULE,
   };
 }
 
@@ -19,7 +25,7 @@ export const meta: Route.MetaFunction = () => [{ title: "Intake file formats · 
 const code = "rounded bg-paper px-1 font-mono text-[0.85em]";
 
 export default function Formats({ loaderData }: Route.ComponentProps) {
-  const { formats, maxBytes, maxCellLength } = loaderData;
+  const { formats, maxBytes, maxCellLength, maxProblems, numberStyles, wholeNumberRule } = loaderData;
   return (
     <section className="space-y-8">
       <div>
@@ -43,7 +49,9 @@ export default function Formats({ loaderData }: Route.ComponentProps) {
             <li>UTF-8, with or without a byte-order mark. Other encodings are refused with a message saying so; save the sheet as “CSV UTF-8”.</li>
             <li>Quote cells that hold the separator or a line break: <code className={code}>"Larkfield, Ltd"</code>.</li>
             <li>Up to {formatBytes(maxBytes)} per file and {maxCellLength} characters per cell. Cells that start like a spreadsheet formula (<code className={code}>=</code>, <code className={code}>@</code>) are refused, never evaluated.</li>
-            <li>Columns the format does not know are reported as warnings and ignored.</li>
+            <li>Columns the format does not know are reported as warnings and ignored; so is the <code className={code}>problems</code> column of a rejected-rows download.</li>
+            <li>A file with more than {maxProblems} problems stops there with a summary of the most frequent ones; fix those and upload it again.</li>
+            <li>A re-import changes only the columns it has: a column left out keeps the catalogue's values; an empty cell in a column clears the value, and the preview marks each one.</li>
           </ul>
         </div>
         <div className="rounded border border-rule bg-white p-4 text-sm">
@@ -51,10 +59,21 @@ export default function Formats({ loaderData }: Route.ComponentProps) {
           <ul className="mt-2 list-disc space-y-1 pl-5">
             <li>Write values with or without a unit: <code className={code}>100 mA</code>, <code className={code}>100mA</code>, <code className={code}>0.1 A</code>; without a unit the SI base unit (V, A, W, Hz, F) is meant.</li>
             <li>SI prefixes p, n, µ (or u), m, k, M, G: <code className={code}>10 µA</code>, <code className={code}>10uA</code>, <code className={code}>250 MHz</code>, <code className={code}>4 pF</code>.</li>
-            <li>A unit given once in the header applies to the whole column: <code className={code}>ic_max [mA]</code>; a unit in a cell wins.</li>
+            <li>A unit given once in the header applies to the whole column: <code className={code}>ic_max [mA]</code> or <code className={code}>ic_max (mA)</code>; a unit in a cell wins.</li>
             <li>Temperatures in °C (<code className={code}>150 °C</code>, <code className={code}>150 C</code>); thermal resistance in °C/W or K/W.</li>
-            <li>Decimal commas: in semicolon- or tab-separated files a comma is always the decimal mark (<code className={code}>0,65 V</code>). In comma-separated files quote such cells; <code className={code}>1,000</code> is refused as ambiguous.</li>
-            <li>No thousands separators; PNP ratings as magnitudes (no minus sign).</li>
+            {numberStyles.map((style) => (
+              <li key={style.files}>
+                {style.files}: {style.rule}
+              </li>
+            ))}
+            <li>{wholeNumberRule}</li>
+            <li>No digit grouping elsewhere; PNP ratings as magnitudes (no minus sign; a typographic minus − reads as one).</li>
+            <li>
+              Written as datasheets print them: <code className={code}>100-300</code>, <code className={code}>≥ 100</code>, <code className={code}>typ 200</code> in hFE
+              columns; <code className={code}>n/a</code>, <code className={code}>-</code> or <code className={code}>—</code> for an empty cell; <code className={code}>N</code> or{" "}
+              <code className={code}>P</code> for the polarity; <code className={code}>EOL</code> for obsolete; <code className={code}>€0,12</code> and <code className={code}>100+</code> in
+              offers. The preview lists every such reading.
+            </li>
           </ul>
         </div>
         <div className="rounded border border-rule bg-white p-4 text-sm md:col-span-2">

@@ -1,10 +1,11 @@
 import { data, Form, Link, redirect, useNavigation } from "react-router";
 import { z } from "zod";
 import type { Route } from "./+types/intake";
+import { MissingPartsList, ReadingsTable } from "#app/components/intake/intake-notes.tsx";
 import { ChangeList, IntakeCountsBar, ProblemsTable, StateTag, type ProblemFilter, type ProblemSort } from "#app/components/intake/intake-parts.tsx";
 import { Notice } from "#app/components/ui/field.tsx";
 import { formatBytes, formatWhen } from "#app/components/ui/format.ts";
-import { commitIntake, discardIntake, getIntake, rollbackIntake } from "#app/data/intakes.server.ts";
+import { commitIntake, discardIntake, getIntake, getIntakeFile, previewIntake, rollbackIntake } from "#app/data/intakes.server.ts";
 import { requireRole } from "#app/lib/auth.server.ts";
 import { parseForm } from "#app/lib/forms.ts";
 
@@ -14,7 +15,9 @@ const ViewSchema = z.object({
   sort: z.enum(["row", "severity", "column"]).catch("row"),
   done: z.enum(["commit", "discard", "rollback"]).optional().catch(undefined),
 });
-const OperationSchema = z.object({ intent: z.enum(["commit", "discard", "rollback"], { error: "Unknown action: choose commit, discard or roll back." }) });
+const OperationSchema = z.object({
+  intent: z.enum(["commit", "discard", "rollback", "preview-again"], { error: "Unknown action: choose commit, discard, roll back or preview again." }),
+});
 
 const DONE_NOTICES = {
   commit: "Committed: the catalogue now holds this intake's rows.",
@@ -41,6 +44,14 @@ export async function action({ request, params }: Route.ActionArgs) {
   const id = intakeIdOf(params);
   const form = await parseForm(request, OperationSchema);
   if (!form.ok) return data({ error: form.fieldErrors.intent ?? form.fieldErrors.form ?? "Send the form again." }, { status: 400 });
+  if (form.data.intent === "preview-again") {
+    // The stored file, compared with the catalogue as it is now, becomes a new preview.
+    const intake = await getIntake(id);
+    const file = await getIntakeFile(id);
+    if (!intake || !file) throw new Response("No intake has that address.", { status: 404 });
+    const again = await previewIntake({ kind: intake.kind, fileName: file.fileName, bytes: file.bytes, uploadedBy: user.id });
+    return redirect(`/intakes/${again.id}`);
+  }
   const result =
     form.data.intent === "commit"
       ? await commitIntake(id, user.id)
@@ -49,7 +60,7 @@ export async function action({ request, params }: Route.ActionArgs) {
         : await rollbackIntake(id, user.id);
   if (result.ok) return redirect(`/intakes/${id}?done=${form.data.intent}`);
   const status = result.code === "not-found" ? 404 : 409;
-  return data({ error: result.message }, { status });
+  return data({ error: result.message, stale: result.code === "stale" }, { status });
 }
 
 export const meta: Route.MetaFunction = ({ data }) => [{ title: `${data?.intake.fileName ?? "Intake"} · Intakes · Betasift` }];
@@ -80,6 +91,14 @@ export default function IntakePage({ loaderData, actionData }: Route.ComponentPr
 
       {view.done && !actionData ? <Notice tone="info">{DONE_NOTICES[view.done]}</Notice> : null}
       {actionData?.error ? <Notice tone="fault">{actionData.error}</Notice> : null}
+      {actionData && "stale" in actionData && actionData.stale ? (
+        <Form method="post">
+          <input type="hidden" name="intent" value="preview-again" />
+          <button type="submit" disabled={busy} className="rounded bg-signal px-4 py-2 font-medium text-white hover:bg-signal/90 disabled:opacity-60">
+            Preview the file again
+          </button>
+        </Form>
+      ) : null}
 
       <IntakeCountsBar counts={intake.counts} />
 
@@ -91,6 +110,7 @@ export default function IntakePage({ loaderData, actionData }: Route.ComponentPr
               <button type="submit" disabled={busy} className="rounded bg-signal px-4 py-2 font-medium text-white hover:bg-signal/90 disabled:opacity-60">
                 Commit {intake.counts.new + intake.counts.changed} {noun}
                 {intake.counts.new + intake.counts.changed === 1 ? "" : "s"}
+                {intake.counts.warnings > 0 ? `, accepting ${intake.counts.warnings} warning${intake.counts.warnings === 1 ? "" : "s"}` : ""}
               </button>
             </Form>
           ) : null}
@@ -137,6 +157,22 @@ export default function IntakePage({ loaderData, actionData }: Route.ComponentPr
           </p>
         ) : null}
         <ProblemsTable problems={intake.problems} filter={view.severity as ProblemFilter} sort={view.sort as ProblemSort} />
+        {intake.counts.rejected > 0 && !intake.problems.some((p) => p.severity === "error" && (p.row === null || p.row === 1)) ? (
+          <p className="mt-2 text-sm">
+            <a href={`/intakes/${intake.id}/rejected`} className="text-signal underline">
+              Download the {intake.counts.rejected} rejected row{intake.counts.rejected === 1 ? "" : "s"}
+            </a>{" "}
+            with a problems column, to correct and upload again.
+          </p>
+        ) : null}
+      </section>
+
+      <section aria-labelledby="readings-heading">
+        <h2 id="readings-heading" className="mb-2 text-lg font-semibold">
+          How cells were read
+        </h2>
+        <p className="mb-2 text-sm text-ink/70">Cells not taken literally, and what they were read as. Check them before committing.</p>
+        <ReadingsTable readings={intake.readings} notListed={intake.readingsNotListed} />
       </section>
 
       <section aria-labelledby="changes-heading">
@@ -148,6 +184,7 @@ export default function IntakePage({ loaderData, actionData }: Route.ComponentPr
             Showing {intake.changes.length} of {intake.changesTotal} accepted rows, changed and new first.
           </p>
         ) : null}
+        <MissingPartsList parts={intake.missingParts} total={intake.missingTotal} />
         <ChangeList changes={intake.changes} kind={intake.kind} />
       </section>
     </section>

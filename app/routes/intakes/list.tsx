@@ -1,19 +1,24 @@
 import { Link } from "react-router";
+import { z } from "zod";
 import type { Route } from "./+types/list";
 import { CountsInline, StateTag } from "#app/components/intake/intake-parts.tsx";
 import { formatBytes, formatWhen } from "#app/components/ui/format.ts";
 import { listIntakes } from "#app/data/intakes.server.ts";
 import { requireRole } from "#app/lib/auth.server.ts";
 
+const PageSchema = z.object({ page: z.coerce.number().int().min(1).max(1_000_000).catch(1) });
+
 export async function loader({ request }: Route.LoaderArgs) {
   await requireRole(request, "librarian");
-  return { intakes: await listIntakes() };
+  const { page } = PageSchema.parse(Object.fromEntries(new URL(request.url).searchParams));
+  return listIntakes(page);
 }
 
 export const meta: Route.MetaFunction = () => [{ title: "Intakes · Betasift" }];
 
 export default function Intakes({ loaderData }: Route.ComponentProps) {
-  const { intakes } = loaderData;
+  const { intakes, total, page, pageSize } = loaderData;
+  const pages = Math.max(1, Math.ceil(total / pageSize));
   return (
     <section>
       <div className="flex flex-wrap items-end justify-between gap-4">
@@ -30,7 +35,7 @@ export default function Intakes({ loaderData }: Route.ComponentProps) {
           </Link>
         </div>
       </div>
-      {intakes.length === 0 ? (
+      {intakes.length === 0 && total === 0 ? (
         <p className="mt-8 rounded border border-rule bg-white px-4 py-6 text-sm">
           No intake yet. <Link to="/intakes/new" className="text-signal underline">Upload a parts or offers file</Link> to start one.
         </p>
@@ -73,6 +78,25 @@ export default function Intakes({ loaderData }: Route.ComponentProps) {
           </table>
         </div>
       )}
+      {pages > 1 ? (
+        <nav aria-label="Intake pages" className="mt-3 flex items-center justify-between text-sm">
+          <span className="text-ink/70">
+            {`Page ${page} of ${pages} · ${total} intakes`}
+          </span>
+          <span className="flex gap-3">
+            {page > 1 ? (
+              <Link to={`?page=${page - 1}`} className="text-signal underline">
+                Newer
+              </Link>
+            ) : null}
+            {page < pages ? (
+              <Link to={`?page=${page + 1}`} className="text-signal underline">
+                Older
+              </Link>
+            ) : null}
+          </span>
+        </nav>
+      ) : null}
     </section>
   );
 }
