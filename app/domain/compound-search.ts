@@ -18,7 +18,7 @@ import {
   thermalInputFor,
 } from "./compound";
 import { decadesOutside, DEFAULT_GAIN_WINDOW_DECADES, DEFAULT_TYP_TO_MIN_FACTOR, prepareGain } from "./gain-curve";
-import { chooseVbe, chooseVbeInto, isOutsidePackages, planSheet, type PreparedPart, qualityOf, type SheetPlan } from "./evaluate-part";
+import { chooseVbe, chooseVbeInto, isOutsidePackages, type PreparedPart, qualityOf } from "./evaluate-part";
 import type { PartSpec, Polarity } from "./part";
 import { compareText, type CatalogueEntry, type PreparedCatalogue, prepareCatalogue, type RankingOptions, supplyOf, type SupplyFacts } from "./rank";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
@@ -36,6 +36,7 @@ import {
   shareOfMargin,
   validateWeights,
 } from "./score";
+import { planSheet, type SheetPlan } from "./screening";
 import { TopK } from "./top-k";
 
 export const DEFAULT_TOP_K = 20;

@@ -9,7 +9,7 @@ import { explainSaturation, judgeSaturation, type SaturationCheckInput, type Sat
 import { explainThermal, judgeThermal, type ThermalCheckInput, type ThermalJudgement } from "./checks/thermal";
 import { explainVoltage, judgeVoltage, type VoltageCheckInput, type VoltageJudgement } from "./checks/voltage";
 import { assessDataQuality, type DataQuality } from "./data-quality";
-import { chooseVbe, DEFAULT_VCE_SAT_VOLTS, type EvaluateOptions, findExclusions } from "./evaluate-part";
+import { chooseVbe, findExclusions } from "./evaluate-part";
 import {
   DEFAULT_GAIN_WINDOW_DECADES,
   DEFAULT_TYP_TO_MIN_FACTOR,
@@ -29,6 +29,7 @@ import {
 } from "./gain-curve";
 import type { GainPoint, PartSpec, Polarity } from "./part";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
+import { DEFAULT_VCE_SAT_VOLTS, type EvaluateOptions } from "./screening";
 
 export const COMPOUND_TOPOLOGIES = ["darlington", "sziklai"] as const;
 export type CompoundTopology = (typeof COMPOUND_TOPOLOGIES)[number];
