@@ -1,6 +1,6 @@
 // The base-emitter bleed resistor across a pair's output device: the value, and what it costs in gain.
 import { formatValue } from "./checks/format";
-import { cornerGainModel, type GainModel, solvePairCurrents, type CompoundTopology, worstGainModel } from "./compound";
+import { type CompoundTopology, cornerGainModel, type GainModel, solvePairCurrents, worstGainModel } from "./compound-currents";
 import { roundToSeries, type ESeriesName } from "./e-series";
 import { chooseVbe } from "./evaluate-part";
 import { hfeAt, worstCaseGain } from "./gain-curve";

@@ -4,19 +4,9 @@ import { FLAG_BITS } from "./check-result";
 import type { DataQuality } from "./data-quality";
 import { newRatingReading, readRating } from "./checks/rating";
 import { judgeThermal } from "./checks/thermal";
-import {
-  canPair,
-  compoundBeta,
-  type CompoundEvaluation,
-  type CompoundScreen,
-  type CompoundTopology,
-  COMPOUND_TOPOLOGIES,
-  explainCompound,
-  worstGainModel,
-  screenCompound,
-  findCompoundExclusions,
-  thermalInputFor,
-} from "./compound";
+import { canPair, compoundBeta, COMPOUND_TOPOLOGIES, type CompoundTopology, worstGainModel } from "./compound-currents";
+import { type CompoundEvaluation, explainCompound } from "./compound-explain";
+import { type CompoundScreen, findCompoundExclusions, screenCompound, thermalInputFor } from "./compound-screen";
 import { decadesOutside, DEFAULT_GAIN_WINDOW_DECADES, DEFAULT_TYP_TO_MIN_FACTOR, prepareGain } from "./gain-curve";
 import { chooseVbe, chooseVbeInto, isOutsidePackages, type PreparedPart, qualityOf } from "./evaluate-part";
 import type { PartSpec, Polarity } from "./part";
