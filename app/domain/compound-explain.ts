@@ -1,13 +1,10 @@
 // Explains a screened pair for the pages: every check's formula, inputs and sentence, each device's own numbers, the pair's figures.
 import { type CheckResult, type FlagName, mergeFlags, type Verdict } from "./check-result";
 import { explainBandwidth } from "./checks/bandwidth";
-import { explainCurrent } from "./checks/current";
 import { explainDrive } from "./checks/drive";
 import { formatValue } from "./checks/format";
 import { explainGain, type GainAtCurrent } from "./checks/gain";
 import { explainSaturation } from "./checks/saturation";
-import { explainThermal } from "./checks/thermal";
-import { explainVoltage } from "./checks/voltage";
 import { compoundPolarity, type CompoundTopology, type PairCurrents } from "./compound-currents";
 import {
   type CompoundOptions,
@@ -21,6 +18,7 @@ import {
 import { explainGainReading, type GainEstimate } from "./gain-curve";
 import type { PartSpec, Polarity } from "./part";
 import type { RequirementSheet } from "./requirement";
+import { explainDeviceRatings } from "./screening";
 
 export interface DeviceInPair<P extends PartSpec = PartSpec> {
   role: PairRole;
@@ -84,8 +82,8 @@ function explainPairGain(at: PairGainAt): GainEstimate {
   const driverGain = explainGainReading(at.driver);
   const outputGain = explainGainReading(at.output);
   return {
-    ...at.pair,
-    flags: [...at.pair.flags],
+    ...at.estimate,
+    flags: [...at.estimate.flags],
     note:
       `pair β from β1 ${formatValue(at.currents.driverHfe, "")} at IC1 ${formatValue(at.currents.driverIcAmps, "A")} (${driverGain.note}) ` +
       `and β2 ${formatValue(at.currents.outputHfe, "")} at IC2 ${formatValue(at.currents.outputIcAmps, "A")} (${outputGain.note})`,
@@ -94,6 +92,7 @@ function explainPairGain(at: PairGainAt): GainEstimate {
 
 /** One device of a pair explained: where it runs and its own rating checks. */
 function explainDevice<P extends PartSpec>(device: DeviceScreen<P>): DeviceInPair<P> {
+  const thermal = device.ratings.thermal;
   return {
     role: device.role,
     part: device.part,
@@ -103,30 +102,26 @@ function explainDevice<P extends PartSpec>(device: DeviceScreen<P>): DeviceInPai
     vbeVolts: device.vbe.volts,
     vbeAssumed: device.vbe.assumed,
     vceVolts: device.vceVolts,
-    dissipationWatts: device.thermal.powerWatts,
-    junctionC: device.thermal.path === "none" ? null : device.thermal.tjC,
-    checks: [
-      explainVoltage(device.voltageInput, device.voltage),
-      explainCurrent(device.currentInput, device.current),
-      explainThermal(device.thermalInput, device.thermal),
-    ],
+    dissipationWatts: thermal.powerWatts,
+    junctionC: thermal.path === "none" ? null : thermal.tjC,
+    checks: explainDeviceRatings(device.ratings),
   };
 }
 
 /** The explanations of a screened pair: every check's formula, inputs and summary, and the pair's figures. */
 export function explainCompound<P extends PartSpec>(screen: CompoundScreen<P>): CompoundEvaluation<P> {
-  const { topology, sheet, operating, pairVbeVolts, bleedOhms, pairSat } = screen;
+  const { topology, plan, operating, pairVbeVolts, bleedOhms, pairSat } = screen;
+  const { sheet, switching } = plan;
   const withoutBleed = screen.solveWithoutBleed();
-  const switching = sheet.mode === "switching";
-  const driver = screen.devices.driver.part;
-  const output = screen.devices.output.part;
+  const driver = screen.driver.part;
+  const output = screen.output.part;
   const gains: GainAtCurrent[] = screen.gains.map((g) => ({ icAmps: g.icAmps, estimate: explainPairGain(g) }));
   const pairChecks: CheckResult[] = [
-    { ...explainGain({ requiredHfe: sheet.requiredHfe ?? (switching ? sheet.forcedGain : null), gains }, screen.gain), subject: "pair" },
+    { ...explainGain({ requiredHfe: plan.requiredHfe, gains }, screen.gain), subject: "pair" },
   ];
-  if (screen.drive !== null) pairChecks.push(explainDrive(screen.drive.input, screen.drive.judged));
-  if (screen.saturation !== null) pairChecks.push(explainSaturation(screen.saturation.input, screen.saturation.judged));
-  if (screen.voltageGainUnmodelled) {
+  if (screen.driveInput !== null) pairChecks.push(explainDrive(screen.driveInput, screen.drive));
+  if (switching) pairChecks.push(explainSaturation(screen.saturationInput, screen.saturation));
+  if (plan.checksVoltageGain) {
     pairChecks.push({
       check: "voltage-gain",
       subject: "pair",
@@ -138,9 +133,9 @@ export function explainCompound<P extends PartSpec>(screen: CompoundScreen<P>): 
       summary: "The voltage gain of a compound pair is not modelled here; confirm it on the circuit.",
     });
   }
-  if (screen.bandwidth !== null) pairChecks.push(explainBandwidth(screen.bandwidth.input, screen.bandwidth.judged));
-  const driverDevice = explainDevice(screen.devices.driver);
-  const outputDevice = explainDevice(screen.devices.output);
+  if (plan.checksBandwidth) pairChecks.push(explainBandwidth(screen.bandwidthInput, screen.bandwidth));
+  const driverDevice = explainDevice(screen.driver);
+  const outputDevice = explainDevice(screen.output);
 
   const checks = [...pairChecks, ...driverDevice.checks, ...outputDevice.checks];
   const quality = screen.quality;

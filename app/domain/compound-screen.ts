@@ -1,12 +1,6 @@
-// Judges a Darlington or Sziklai pair in numbers only: its currents solved, each device checked at its own current.
-import { FLAG_BITS, type Judgement, mergeFlags, type Verdict, worseVerdict } from "./check-result";
-import { type BandwidthCheckInput, type BandwidthJudgement, judgeBandwidth } from "./checks/bandwidth";
-import { type CurrentCheckInput, type CurrentJudgement, judgeCurrent } from "./checks/current";
-import { type DriveCheckInput, type DriveJudgement, judgeDrive } from "./checks/drive";
-import { type GainJudgement, judgeGain } from "./checks/gain";
-import { judgeSaturation, type SaturationCheckInput, type SaturationJudgement } from "./checks/saturation";
-import { judgeThermal, type ThermalCheckInput, type ThermalJudgement } from "./checks/thermal";
-import { judgeVoltage, type VoltageCheckInput, type VoltageJudgement } from "./checks/voltage";
+// Judges a Darlington or Sziklai pair in numbers only: its currents solved, then the shared screening skeleton run on both devices.
+import { mergeFlags } from "./check-result";
+import { assessDataQuality, type DataQuality } from "./data-quality";
 import {
   canPair,
   compoundPolarity,
@@ -17,22 +11,22 @@ import {
   solvePairCurrents,
   worstGainModel,
 } from "./compound-currents";
-import { assessDataQuality, type DataQuality } from "./data-quality";
 import { chooseVbe, findExclusions } from "./evaluate-part";
-import {
-  DEFAULT_GAIN_WINDOW_DECADES,
-  DEFAULT_TYP_TO_MIN_FACTOR,
-  type GainReading,
-  newGainReading,
-  type PreparedGain,
-  prepareGain,
-  readWorstCaseGain,
-  type SaturationEstimate,
-  vceSatAt,
-} from "./gain-curve";
+import { type GainReading, newGainReading, type PreparedGain, prepareGain, readWorstCaseGain, type SaturationEstimate, vceSatAt } from "./gain-curve";
 import type { PartSpec } from "./part";
-import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
-import { DEFAULT_VCE_SAT_VOLTS, type EvaluateOptions } from "./screening";
+import type { RequirementSheet } from "./requirement";
+import {
+  type DeviceRatings,
+  type EvaluateOptions,
+  judgeScreening,
+  newDeviceRatings,
+  newScreening,
+  planSheet,
+  saturationDropVolts,
+  type Screening,
+  setDeviceRatings,
+  type SheetPlan,
+} from "./screening";
 
 export interface CompoundOptions extends EvaluateOptions {
   /** Base-emitter bleed resistor across the output; null or absent when none is fitted. */
@@ -40,6 +34,46 @@ export interface CompoundOptions extends EvaluateOptions {
 }
 
 export type PairRole = "driver" | "output";
+
+/** The pair's gain at one of the circuit's currents: the solved currents, each device's reading there, and the pair's. */
+export interface PairGainAt {
+  icAmps: number;
+  currents: PairCurrents;
+  driver: GainReading;
+  output: GainReading;
+  /** The pair's own reading, which the gain check judges. */
+  estimate: GainReading;
+}
+
+/** One device of a pair: where it runs, and its own rating judgements. */
+export interface DeviceScreen<P extends PartSpec = PartSpec> {
+  role: PairRole;
+  part: P;
+  icAmps: number;
+  peakIcAmps: number;
+  gain: GainReading;
+  vbe: { volts: number; assumed: boolean };
+  vceVolts: number;
+  ratings: DeviceRatings;
+}
+
+/** Every judgement of a pair with the inputs each read: numbers only, for the search to score pairs without explaining them. */
+export interface CompoundScreen<P extends PartSpec = PartSpec> extends Screening {
+  topology: CompoundTopology;
+  plan: SheetPlan;
+  gains: PairGainAt[];
+  /** The lower data-quality score of the two devices. */
+  dataQualityScore: number;
+  bleedOhms: number | null;
+  operating: PairCurrents;
+  /** The pair's currents at the operating IC without the bleed resistor, solved when the explanation asks. */
+  solveWithoutBleed: () => PairCurrents;
+  pairVbeVolts: number;
+  pairSat: SaturationEstimate | null;
+  driver: DeviceScreen<P>;
+  output: DeviceScreen<P>;
+  quality: [DataQuality, DataQuality];
+}
 
 /** The pair's gain as one reading, so the single-device gain judgement can judge it. */
 function pairGainReading(currents: PairCurrents, driverGain: GainReading, outputGain: GainReading): GainReading {
@@ -54,15 +88,6 @@ function pairGainReading(currents: PairCurrents, driverGain: GainReading, output
   };
 }
 
-/** The pair's gain at one of the circuit's currents: the solved currents and each device's reading there. */
-export interface PairGainAt {
-  icAmps: number;
-  currents: PairCurrents;
-  driver: GainReading;
-  output: GainReading;
-  pair: GainReading;
-}
-
 /** Why a pair lies outside the sheet: the pair's polarity, and each device's package. */
 export function findCompoundExclusions(driver: PartSpec, output: PartSpec, sheet: RequirementSheet): string[] {
   const reasons: string[] = [];
@@ -75,77 +100,6 @@ export function findCompoundExclusions(driver: PartSpec, output: PartSpec, sheet
     for (const reason of findExclusions(part, anyPolarity)) reasons.push(`${role}: ${reason}`);
   }
   return reasons;
-}
-
-/** One device's own judgements inside a pair, with the inputs they read. */
-export interface DeviceScreen<P extends PartSpec> {
-  role: PairRole;
-  part: P;
-  icAmps: number;
-  peakIcAmps: number;
-  gain: GainReading;
-  vbe: { volts: number; assumed: boolean };
-  vceVolts: number;
-  voltageInput: VoltageCheckInput;
-  voltage: VoltageJudgement;
-  currentInput: CurrentCheckInput;
-  current: CurrentJudgement;
-  thermalInput: ThermalCheckInput;
-  thermal: ThermalJudgement;
-}
-
-/** Every judgement of a pair with the inputs each read: numbers only, for the search to score pairs without explaining them. */
-export interface CompoundScreen<P extends PartSpec = PartSpec> {
-  topology: CompoundTopology;
-  sheet: RequirementSheet;
-  verdict: Verdict;
-  /** The tightest margin of any check; null when none gives one. */
-  margin: number | null;
-  /** Every check's flags and stale-datasheet, as a mask of FLAG_BITS. */
-  flags: number;
-  /** The lower data-quality score of the two devices. */
-  dataQualityScore: number;
-  bleedOhms: number | null;
-  operating: PairCurrents;
-  /** The pair's currents at the operating IC without the bleed resistor, solved when the explanation asks. */
-  solveWithoutBleed: () => PairCurrents;
-  pairVbeVolts: number;
-  gains: PairGainAt[];
-  gain: GainJudgement;
-  drive: { input: DriveCheckInput; judged: DriveJudgement } | null;
-  saturation: { input: SaturationCheckInput; judged: SaturationJudgement } | null;
-  pairSat: SaturationEstimate | null;
-  /** The sheet asks for a voltage gain, which is not modelled for pairs: marginal. */
-  voltageGainUnmodelled: boolean;
-  bandwidth: { input: BandwidthCheckInput; judged: BandwidthJudgement } | null;
-  devices: { driver: DeviceScreen<P>; output: DeviceScreen<P> };
-  quality: [DataQuality, DataQuality];
-}
-
-function foldInto(screen: { verdict: Verdict; margin: number | null; flags: number }, judged: Judgement): void {
-  screen.verdict = worseVerdict(screen.verdict, judged.verdict);
-  if (judged.margin !== null) screen.margin = screen.margin === null ? judged.margin : Math.min(screen.margin, judged.margin);
-  screen.flags |= judged.flags;
-}
-
-/** The thermal check input for one device of a pair; the search's bounds use the same one. */
-export function thermalInputFor(part: PartSpec, role: PairRole, sheet: RequirementSheet, vceVolts: number, icAmps: number): ThermalCheckInput {
-  const switching = sheet.mode === "switching";
-  return {
-    subject: role,
-    mode: sheet.mode,
-    vceVolts,
-    icAmps,
-    dutyCycle: switching ? sheet.dutyCycle : 1,
-    ambientC: sheet.ambientC,
-    rthJaCPerW: part.rthJaCPerW,
-    rthJcCPerW: part.rthJcCPerW,
-    heatsinkRthCPerW: sheet.heatsinkRthCPerW,
-    tjMaxC: part.tjMaxC,
-    ptotWatts: part.ptotWatts,
-    ptotReference: part.ptotReference,
-    derating: sheet.derating,
-  };
 }
 
 /**
@@ -165,16 +119,12 @@ export function screenCompound<P extends PartSpec>(
   if (!canPair(topology, driver, output)) {
     throw new RangeError(`a ${topology} pair needs ${topology === "darlington" ? "one polarity" : "opposite polarities"}`);
   }
+  const plan = planSheet(sheet, options);
+  const { icAmps, peakIcAmps, switching } = plan;
   const bleedOhms = options.bleedOhms ?? null;
-  const switching = sheet.mode === "switching";
-  const icAmps = sheet.operatingIcAmps;
-  const peakIcAmps = peakIcOf(sheet);
-  const peakVceVolts = peakVceOf(sheet);
-  const factor = options.typToMinFactor ?? DEFAULT_TYP_TO_MIN_FACTOR;
-  const windowDecades = options.windowDecades ?? DEFAULT_GAIN_WINDOW_DECADES;
   const driverGains = prepareGain(driver.gainPoints);
   const outputGains = prepareGain(output.gainPoints);
-  const readGain = (gains: PreparedGain, current: number) => readWorstCaseGain(gains, current, factor, windowDecades, newGainReading());
+  const readGain = (gains: PreparedGain, current: number) => readWorstCaseGain(gains, current, plan.typToMinFactor, plan.windowDecades, newGainReading());
   // The output is never saturated in either pair, so its VBE is VBE(on) even when switching.
   const outputVbe = chooseVbe(output, icAmps, "linear");
   const driverHfeAt = worstGainModel(driver, options);
@@ -184,133 +134,63 @@ export function screenCompound<P extends PartSpec>(
 
   const operating = solve(icAmps, bleedOhms);
   const peak = peakIcAmps === icAmps ? operating : solve(peakIcAmps, bleedOhms);
-  const driverGain = readGain(driverGains, operating.driverIcAmps);
-  const outputGain = readGain(outputGains, operating.outputIcAmps);
-  const driverVbe = chooseVbe(driver, operating.driverIcAmps, sheet.mode);
-  const pairVbeVolts = compoundVbe(topology, driverVbe.volts, outputVbe.volts);
-  const screen = { verdict: "fits" as Verdict, margin: null as number | null, flags: 0 };
-
-  const gainCurrents = [...new Set([minIcOf(sheet), icAmps, peakIcAmps])];
-  const gains: PairGainAt[] = gainCurrents.map((current) => {
+  const gains: PairGainAt[] = plan.gainCurrents.map((current) => {
     const currents = current === icAmps ? operating : current === peakIcAmps ? peak : solve(current, bleedOhms);
     const driverAt = readGain(driverGains, currents.driverIcAmps);
     const outputAt = readGain(outputGains, currents.outputIcAmps);
-    return { icAmps: current, currents, driver: driverAt, output: outputAt, pair: pairGainReading(currents, driverAt, outputAt) };
+    return { icAmps: current, currents, driver: driverAt, output: outputAt, estimate: pairGainReading(currents, driverAt, outputAt) };
   });
-  const gain = judgeGain({ requiredHfe: sheet.requiredHfe ?? (switching ? sheet.forcedGain : null), gains: gains.map((g) => ({ icAmps: g.icAmps, estimate: g.pair })) });
-  foldInto(screen, gain);
+  const driverVbe = chooseVbe(driver, operating.driverIcAmps, sheet.mode);
+  const pairVbeVolts = compoundVbe(topology, driverVbe.volts, outputVbe.volts);
+  const driverSat = switching && operating.feasible ? vceSatAt(driver.saturationPoints, operating.driverIcAmps) : null;
+  const pairSat = driverSat === null ? null : { ...driverSat, volts: compoundVceSat(driverSat.volts, outputVbe.volts) };
 
-  let drivenForcedGain = sheet.forcedGain;
-  let drive: CompoundScreen<P>["drive"] = null;
-  if (sheet.drive != null) {
-    // Switching saturates the driver at the sheet's forced gain; the output takes what the driver's emitter gives.
-    const pairForcedGain = operating.feasible ? (icAmps * sheet.forcedGain) / operating.driverIcAmps : sheet.forcedGain;
-    const input: DriveCheckInput = {
-      subject: "pair",
-      mode: sheet.mode,
-      icAmps,
-      worstHfe: operating.feasible ? operating.pairHfe : 0,
-      forcedGain: pairForcedGain,
-      vbeVolts: pairVbeVolts,
-      vbeAssumed: driverVbe.assumed || outputVbe.assumed,
-      drive: sheet.drive,
-      series: options.series,
-    };
-    drive = { input, judged: judgeDrive(input) };
-    foldInto(screen, drive.judged);
-    drivenForcedGain = drive.judged.ibAvailableAmps > 0 ? operating.driverIcAmps / drive.judged.ibAvailableAmps : Number.POSITIVE_INFINITY;
-  }
-
-  let driverSat: SaturationEstimate | null = null;
-  let pairSat: SaturationEstimate | null = null;
-  let saturation: CompoundScreen<P>["saturation"] = null;
-  if (switching) {
-    driverSat = operating.feasible ? vceSatAt(driver.saturationPoints, operating.driverIcAmps) : null;
-    pairSat = driverSat === null ? null : { ...driverSat, volts: compoundVceSat(driverSat.volts, outputVbe.volts) };
-    const input: SaturationCheckInput = {
-      subject: "pair",
-      icAmps,
-      drivenForcedGain,
-      worstHfe: operating.driverHfe,
-      saturation: pairSat,
-      allowedSatDropVolts: sheet.allowedSatDropVolts,
-    };
-    saturation = { input, judged: judgeSaturation(input) };
-    foldInto(screen, saturation.judged);
-  }
-
-  const gainNeeded = sheet.requiredVoltageGain ?? sheet.requiredHfe;
-  const voltageGainUnmodelled = !switching && sheet.requiredVoltageGain != null && sheet.loadOhms != null;
-  if (voltageGainUnmodelled) screen.verdict = worseVerdict(screen.verdict, "marginal");
-  let bandwidth: CompoundScreen<P>["bandwidth"] = null;
-  if (sheet.bandwidthHz != null && gainNeeded != null) {
-    // The pair is no faster than its slower device.
-    const ftHz = driver.ftHz === null || output.ftHz === null ? null : Math.min(driver.ftHz, output.ftHz);
-    const input: BandwidthCheckInput = { subject: "pair", ftHz, bandwidthHz: sheet.bandwidthHz, gainNeeded };
-    bandwidth = { input, judged: judgeBandwidth(input) };
-    foldInto(screen, bandwidth.judged);
-  }
-
-  const satVolts = driverSat?.volts ?? sheet.allowedSatDropVolts ?? DEFAULT_VCE_SAT_VOLTS;
-  const driverVce = switching ? satVolts : Math.max(0, operatingVceOf(sheet) - outputVbe.volts);
-  const outputVce = switching ? compoundVceSat(satVolts, outputVbe.volts) : operatingVceOf(sheet);
-  const deviceOf = (role: PairRole, part: P, gainAt: GainReading, vbe: { volts: number; assumed: boolean }, ownIc: number, ownPeakIc: number, vceVolts: number): DeviceScreen<P> => {
-    const voltageInput: VoltageCheckInput = {
-      subject: role,
-      // When the pair is off VBE2 collapses, so the driver too stands the full VCE.
-      peakVceVolts,
-      vceoVolts: part.vceoVolts,
-      reverseVbeVolts: role === "driver" ? sheet.reverseVbeVolts : null,
-      veboVolts: part.veboVolts,
-      voltageFraction: sheet.derating.voltageFraction,
-    };
-    const currentInput: CurrentCheckInput = { subject: role, peakIcAmps: ownPeakIc, icMaxAmps: part.icMaxAmps, currentFraction: sheet.derating.currentFraction };
-    const thermalInput = thermalInputFor(part, role, sheet, vceVolts, ownIc);
-    const device: DeviceScreen<P> = {
-      role,
-      part,
-      icAmps: ownIc,
-      peakIcAmps: ownPeakIc,
-      gain: gainAt,
-      vbe,
-      vceVolts,
-      voltageInput,
-      voltage: judgeVoltage(voltageInput),
-      currentInput,
-      current: judgeCurrent(currentInput),
-      thermalInput,
-      thermal: judgeThermal(thermalInput),
-    };
-    foldInto(screen, device.voltage);
-    foldInto(screen, device.current);
-    foldInto(screen, device.thermal);
-    return device;
-  };
+  const satVolts = saturationDropVolts(driverSat, sheet);
   const feasibleOr = (value: number, fallback: number) => (Number.isFinite(value) ? value : fallback);
-  const driverDevice = deviceOf("driver", driver, driverGain, driverVbe, feasibleOr(operating.driverIcAmps, 0), feasibleOr(peak.driverIcAmps, 0), driverVce);
-  const outputDevice = deviceOf("output", output, outputGain, outputVbe, feasibleOr(operating.outputIcAmps, icAmps), feasibleOr(peak.outputIcAmps, peakIcAmps), outputVce);
+  const deviceOf = (role: PairRole, part: P, gain: GainReading, vbe: { volts: number; assumed: boolean }, ownIc: number, ownPeakIc: number, vceVolts: number): DeviceScreen<P> => {
+    // When the pair is off VBE2 collapses, so the driver too stands the full VCE; only the driver's base sees the reverse VBE.
+    const ratings = setDeviceRatings(newDeviceRatings(plan, role, role === "driver" ? sheet.reverseVbeVolts : null), part, ownIc, ownPeakIc, vceVolts, false);
+    return { role, part, icAmps: ownIc, peakIcAmps: ownPeakIc, gain, vbe, vceVolts, ratings };
+  };
+  const operatingGains = gains[plan.operatingIndex];
+  // Linear, the driver stands one VBE2 less than the pair; saturated, the output stands one VBE2 above the driver's VCE(sat).
+  const driverVce = switching ? satVolts : Math.max(0, plan.operatingVceVolts - outputVbe.volts);
+  const outputVce = switching ? compoundVceSat(satVolts, outputVbe.volts) : plan.operatingVceVolts;
+  const driverDevice = deviceOf("driver", driver, operatingGains.driver, driverVbe, feasibleOr(operating.driverIcAmps, 0), feasibleOr(peak.driverIcAmps, 0), driverVce);
+  const outputDevice = deviceOf("output", output, operatingGains.output, outputVbe, feasibleOr(operating.outputIcAmps, icAmps), feasibleOr(peak.outputIcAmps, peakIcAmps), outputVce);
+
+  const screening = newScreening(plan, "pair", [driverDevice.ratings, outputDevice.ratings], false);
+  screening.gains = gains;
+  screening.gainInput.gains = gains;
+  const driveInput = screening.driveInput;
+  if (driveInput !== null) {
+    // Switching saturates the driver at the sheet's forced gain; the output takes what the driver's emitter gives.
+    driveInput.forcedGain = operating.feasible ? (icAmps * sheet.forcedGain) / operating.driverIcAmps : sheet.forcedGain;
+    driveInput.worstHfe = operating.feasible ? operating.pairHfe : 0;
+    driveInput.vbeVolts = pairVbeVolts;
+    driveInput.vbeAssumed = driverVbe.assumed || outputVbe.assumed;
+  }
+  screening.drivenIcAmps = operating.driverIcAmps;
+  screening.saturationInput.worstHfe = operating.driverHfe;
+  screening.saturationInput.saturation = pairSat;
+  // The pair is no faster than its slower device.
+  screening.bandwidthInput.ftHz = driver.ftHz === null || output.ftHz === null ? null : Math.min(driver.ftHz, output.ftHz);
 
   const quality: [DataQuality, DataQuality] = qualities ?? [assessDataQuality(driver, options), assessDataQuality(output, options)];
-  if (quality[0].flags.includes("stale-datasheet") || quality[1].flags.includes("stale-datasheet")) screen.flags |= FLAG_BITS["stale-datasheet"];
+  judgeScreening(screening, plan, quality[0].flags.includes("stale-datasheet") || quality[1].flags.includes("stale-datasheet"));
   return {
+    ...screening,
     topology,
-    sheet,
-    verdict: screen.verdict,
-    margin: screen.margin,
-    flags: screen.flags,
+    plan,
+    gains,
     dataQualityScore: Math.min(quality[0].score, quality[1].score),
     bleedOhms,
     operating,
     solveWithoutBleed: () => (bleedOhms === null ? operating : solve(icAmps, null)),
     pairVbeVolts,
-    gains,
-    gain,
-    drive,
-    saturation,
     pairSat,
-    voltageGainUnmodelled,
-    bandwidth,
-    devices: { driver: driverDevice, output: outputDevice },
+    driver: driverDevice,
+    output: outputDevice,
     quality,
   };
 }

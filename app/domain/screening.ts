@@ -109,7 +109,7 @@ function plainPolicy(policy: DeratingPolicy): DeratingPolicy {
 }
 
 /** A thermal input with the sheet's numbers in and the device's own left blank, for setThermalDevice to fill. */
-function newThermalInput(sheet: RequirementSheet, subject: string | undefined): ThermalCheckInput {
+function newThermalInput(sheet: RequirementSheet, subject: string | undefined, derating: DeratingPolicy): ThermalCheckInput {
   return {
     subject,
     mode: sheet.mode,
@@ -124,7 +124,7 @@ function newThermalInput(sheet: RequirementSheet, subject: string | undefined): 
     tjMaxC: null,
     ptotWatts: null,
     ptotReference: null,
-    derating: plainPolicy(sheet.derating),
+    derating,
   };
 }
 
@@ -140,6 +140,11 @@ function setThermalDevice(input: ThermalCheckInput, part: PartSpec, vceVolts: nu
   return input;
 }
 
+/** The thermal check input of one device at its own VCE and current, in a fresh object (the pair search bounds heat with it). */
+export function deviceThermalInput(part: PartSpec, subject: string | undefined, sheet: RequirementSheet, vceVolts: number, icAmps: number): ThermalCheckInput {
+  return setThermalDevice(newThermalInput(sheet, subject, sheet.derating), part, vceVolts, false, icAmps);
+}
+
 /** Rating slots for one device; reverseVbeVolts is the sheet's for the device whose base the drive pulls, else null. */
 export function newDeviceRatings(plan: SheetPlan, subject: string | undefined, reverseVbeVolts: number | null): DeviceRatings {
   const sheet = plan.sheet;
@@ -148,7 +153,8 @@ export function newDeviceRatings(plan: SheetPlan, subject: string | undefined, r
     voltage: newVoltageJudgement(),
     currentInput: { subject, peakIcAmps: plan.peakIcAmps, icMaxAmps: 0, currentFraction: sheet.derating.currentFraction },
     current: newRatingReading(),
-    thermalInput: newThermalInput(sheet, subject),
+    // Slots are filled again for every part, so they get the plain copy the hot loop reads fastest.
+    thermalInput: newThermalInput(sheet, subject, plainPolicy(sheet.derating)),
     thermal: newThermalJudgement(),
   };
 }
