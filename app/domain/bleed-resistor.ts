@@ -1,11 +1,12 @@
 // The base-emitter bleed resistor across a pair's output device: the value, and what it costs in gain.
 import { formatValue } from "./checks/format";
-import { cornerGainModel, type GainModel, solvePairCurrents, type CompoundTopology, worstGainModel } from "./compound";
+import { type CompoundTopology, cornerGainModel, type GainModel, solvePairCurrents, worstGainModel } from "./compound-currents";
 import { roundToSeries, type ESeriesName } from "./e-series";
-import { chooseVbe, type EvaluateOptions } from "./evaluate-part";
+import { chooseVbe } from "./evaluate-part";
 import { hfeAt, worstCaseGain } from "./gain-curve";
 import type { GainPoint, PartSpec } from "./part";
 import { minIcOf, type RequirementSheet } from "./requirement";
+import type { EvaluateOptions } from "./screening";
 
 /** The bleed may take at most this share of the driver's current at the lowest operating current (a product decision). */
 export const DEFAULT_BLEED_SHARE = 0.1;

@@ -4,21 +4,11 @@ import { FLAG_BITS } from "./check-result";
 import type { DataQuality } from "./data-quality";
 import { newRatingReading, readRating } from "./checks/rating";
 import { judgeThermal } from "./checks/thermal";
-import {
-  canPair,
-  compoundBeta,
-  type CompoundEvaluation,
-  type CompoundScreen,
-  type CompoundTopology,
-  COMPOUND_TOPOLOGIES,
-  explainCompound,
-  worstGainModel,
-  screenCompound,
-  findCompoundExclusions,
-  thermalInputFor,
-} from "./compound";
+import { canPair, compoundBeta, COMPOUND_TOPOLOGIES, type CompoundTopology, worstGainModel } from "./compound-currents";
+import { type CompoundEvaluation, explainCompound } from "./compound-explain";
+import { type CompoundScreen, findCompoundExclusions, screenCompound } from "./compound-screen";
 import { decadesOutside, DEFAULT_GAIN_WINDOW_DECADES, DEFAULT_TYP_TO_MIN_FACTOR, prepareGain } from "./gain-curve";
-import { chooseVbe, chooseVbeInto, isOutsidePackages, planSheet, type PreparedPart, qualityOf, type SheetPlan } from "./evaluate-part";
+import { chooseVbe, chooseVbeInto, isOutsidePackages, type PreparedPart, qualityOf } from "./evaluate-part";
 import type { PartSpec, Polarity } from "./part";
 import { compareText, type CatalogueEntry, type PreparedCatalogue, prepareCatalogue, type RankingOptions, supplyOf, type SupplyFacts } from "./rank";
 import { minIcOf, operatingVceOf, peakIcOf, peakVceOf, type RequirementSheet } from "./requirement";
@@ -36,6 +26,7 @@ import {
   shareOfMargin,
   validateWeights,
 } from "./score";
+import { deviceThermalInput, planSheet, type SheetPlan } from "./screening";
 import { TopK } from "./top-k";
 
 export const DEFAULT_TOP_K = 20;
@@ -249,7 +240,7 @@ function boundOutputThermal(facts: PartFacts<PartSpec>, settings: BaseSettings):
   const { sheet } = settings;
   const part = facts.part;
   const vceVolts = sheet.mode === "switching" ? chooseVbe(part, sheet.operatingIcAmps, "linear").volts : operatingVceOf(sheet);
-  const thermal = judgeThermal(thermalInputFor(part, "output", sheet, vceVolts, leastOutputCurrent(sheet.operatingIcAmps, facts.minGain, settings)));
+  const thermal = judgeThermal(deviceThermalInput(part, "output", sheet, vceVolts, leastOutputCurrent(sheet.operatingIcAmps, facts.minGain, settings)));
   return { share: thermal.margin === null ? null : shareOfMargin(thermal.margin, settings.fullMargin), fails: thermal.verdict === "fails" };
 }
 

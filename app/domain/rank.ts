@@ -2,7 +2,6 @@
 // Every part is screened (numeric judgements only); explanations are built when a row's evaluation is read.
 import { type CheckResult, FLAG_BITS, type FlagName, flagsOfMask, type Verdict } from "./check-result";
 import {
-  type EvaluateOptions,
   explainScreen,
   findExclusions,
   isExcluded,
@@ -11,8 +10,6 @@ import {
   type PartScreen,
   type PreparedPart,
   preparePart,
-  type SheetPlan,
-  planSheet,
   screenPart,
 } from "./evaluate-part";
 import type { Lifecycle, Offer, PartSpec } from "./part";
@@ -32,6 +29,7 @@ import {
   type ScoreWeights,
   validateWeights,
 } from "./score";
+import { type EvaluateOptions, planSheet, type SheetPlan } from "./screening";
 
 /** A part with the offers it can be bought from. */
 export interface CatalogueEntry<P extends PartSpec = PartSpec> {

@@ -4,23 +4,14 @@ import { generateParts } from "#tests/bench/generate-parts.ts";
 import { FLAG_BITS, FLAG_NAMES, flagsOfMask, maskOfFlags, worseVerdict, worstVerdict } from "./check-result";
 import { checkThermal, explainThermal, judgeThermal, newThermalJudgement, type ThermalCheckInput } from "./checks/thermal";
 import { checkVoltage, explainVoltage, judgeVoltage, newVoltageJudgement } from "./checks/voltage";
-import { evaluateCompound, explainCompound, screenCompound } from "./compound";
+import { evaluateCompound, explainCompound } from "./compound-explain";
+import { screenCompound } from "./compound-screen";
 import { DEFAULT_DERATING } from "./derating";
-import {
-  evaluatePart,
-  explainScreen,
-  isExcluded,
-  isOutsidePackages,
-  newPartScreen,
-  packageKeyOf,
-  planSheet,
-  preparePart,
-  qualityOf,
-  screenPart,
-} from "./evaluate-part";
+import { evaluatePart, explainScreen, isExcluded, isOutsidePackages, newPartScreen, preparePart, qualityOf, screenPart } from "./evaluate-part";
 import { explainGainReading, interpolateLogLog, newGainReading, prepareGain, ratioDistance, readWorstCaseGain, vceSatAt, worstCaseGain } from "./gain-curve";
 import { prepareCatalogue, rankParts, rankPrepared, supplyOf } from "./rank";
 import { parseRequirementSheet, presets } from "./requirement";
+import { packageKeyOf, planSheet } from "./screening";
 import { combineScore, combineScoreParts, scoreDataQuality, scoreLeastMargin, scoreMargins, scoreRecordQuality } from "./score";
 
 const catalogue = generateParts(300, 5);

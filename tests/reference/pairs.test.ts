@@ -1,7 +1,7 @@
 // Darlington and Sziklai pairs of the engine against ngspice runs of the invented Gummel-Poon models in models/invented-bjt.lib.
 import { beforeAll, describe, expect, it } from "vitest";
 import { suggestBleedResistor } from "#app/domain/bleed-resistor.ts";
-import { compoundVbe, compoundVceSat, solvePairCurrents, type CompoundTopology } from "#app/domain/compound.ts";
+import { compoundVbe, compoundVceSat, solvePairCurrents, type CompoundTopology } from "#app/domain/compound-currents.ts";
 import { hfeAt, vceSatAt } from "#app/domain/gain-curve.ts";
 import type { GainPoint, SaturationPoint } from "#app/domain/part.ts";
 import { requireNgspice, simulate, valueAt, vectorOf } from "./ngspice.ts";
