@@ -10,6 +10,7 @@ import { messyIntakeParts } from "#seeds/data/generated-parts.ts";
 import { demoManufacturers } from "#seeds/data/manufacturers.ts";
 import { demoOffers, demoSuppliers } from "#seeds/data/offers.ts";
 import { demoComplementaryPairs, demoParts } from "#seeds/data/parts.ts";
+import { offersTemplateExample, partsTemplateExample, TEMPLATE_EXAMPLE_PART_NUMBER } from "#seeds/data/template-example.ts";
 import { renderDemoFixtures } from "#seeds/demo-fixtures.ts";
 
 // Numbering schemes of registered and house-coded parts that the demo must never imitate (the project's rule).
@@ -393,5 +394,27 @@ describe("messy librarian file fixtures/demo/parts-messy.csv", () => {
       });
       expect(close(value.saturationPoints[0].vceSatMaxVolts, part.saturationPoints[0].vceSatMaxVolts), value.partNumber).toBe(true);
     }
+  });
+});
+
+describe("intake template example rows (seeds/data/template-example.ts)", () => {
+  const encode = (row: Record<string, string>) =>
+    new TextEncoder().encode(`${Object.keys(row).join(",")}\n${Object.values(row).map((cell) => (cell.includes(",") ? `"${cell}"` : cell)).join(",")}\n`);
+
+  it("come from a demo part and one of its offers, and parse back to them without a problem", () => {
+    const part = demoParts.find((candidate) => candidate.partNumber === TEMPLATE_EXAMPLE_PART_NUMBER)!;
+    expect(part.manufacturer).not.toMatch(/larkfield/i);
+    const parts = parsePartsFile(encode(partsTemplateExample));
+    expect(parts.problems).toEqual([]);
+    const { gainPoints, saturationPoints, ...ratings } = parts.rows[0].value;
+    const { gainPoints: partGain, saturationPoints: partSat, ...partRatings } = part;
+    expect(ratings).toEqual(partRatings);
+    expect(partGain).toContainEqual(gainPoints[0]);
+    expect(saturationPoints[0]).toEqual(partSat[0]);
+    const offers = parseOffersFile(encode(offersTemplateExample));
+    expect(offers.problems).toEqual([]);
+    const offer = offers.rows[0].value;
+    const demo = demoOffers.find((row) => row.partNumber === offer.partNumber && row.offer.supplier === offer.offer.supplier)!;
+    expect(offer.offer).toEqual({ ...demo.offer, priceBreaks: demo.offer.priceBreaks.slice(0, 1) });
   });
 });
