@@ -1,17 +1,9 @@
-// Writes the demo catalogue and offers as intake files: npx tsx seeds/write-demo-fixtures.ts
-import { mkdirSync, writeFileSync } from "node:fs";
-import { fileURLToPath } from "node:url";
-import { writeOffersCsv, writePartsCsv } from "#app/domain/intake/write-csv.ts";
+// Rewrites fixtures/demo/ from the committed TypeScript data (after editing offers, say): npx tsx seeds/write-demo-fixtures.ts
+// To regenerate the parts themselves from the device families, run seeds/generate-demo-catalogue.ts instead.
 import { demoOffers } from "#seeds/data/offers.ts";
+import { messyIntakeParts } from "#seeds/data/generated-parts.ts";
 import { demoParts } from "#seeds/data/parts.ts";
+import { DEMO_FIXTURES_DIR, renderDemoFixtures, writeDemoFixtureFiles } from "./demo-fixtures.ts";
 
-const FIXTURES_DIR = fileURLToPath(new URL("../fixtures/demo/", import.meta.url));
-
-function writeDemoFixtures(): void {
-  mkdirSync(FIXTURES_DIR, { recursive: true });
-  writeFileSync(`${FIXTURES_DIR}parts.csv`, writePartsCsv(demoParts), "utf8");
-  writeFileSync(`${FIXTURES_DIR}offers.csv`, writeOffersCsv(demoOffers), "utf8");
-  console.log(`wrote ${demoParts.length} parts and ${demoOffers.length} offers to ${FIXTURES_DIR}`);
-}
-
-writeDemoFixtures();
+writeDemoFixtureFiles(renderDemoFixtures(demoParts, messyIntakeParts, demoOffers));
+console.log(`wrote ${demoParts.length} parts, ${demoOffers.length} offers and the messy file to ${DEMO_FIXTURES_DIR}`);

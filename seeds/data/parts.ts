@@ -1,20 +1,10 @@
-// The invented demo catalogue: every part below is fictional, from the manufacturers in manufacturers.ts.
+// The invented demo catalogue: every part fictional, from the manufacturers in manufacturers.ts, generated from the
+// invented device families in seeds/device-families/ by seeds/generate-demo-catalogue.ts.
 import { type PartSpec, partKey } from "#app/domain/part.ts";
+import { generatedParts } from "./generated-parts.ts";
 import { demoManufacturers } from "./manufacturers.ts";
-import { darlingtonParts } from "./parts-darlington.ts";
-import { dualParts, highGainParts } from "./parts-high-gain.ts";
-import { mediumPowerParts } from "./parts-medium-power.ts";
-import { powerParts } from "./parts-power.ts";
-import { smallSignalParts } from "./parts-small-signal.ts";
 
-export const demoParts: PartSpec[] = [
-  ...smallSignalParts,
-  ...highGainParts,
-  ...dualParts,
-  ...mediumPowerParts,
-  ...powerParts,
-  ...darlingtonParts,
-];
+export const demoParts: PartSpec[] = generatedParts;
 
 export interface ComplementaryPair {
   npn: PartSpec;

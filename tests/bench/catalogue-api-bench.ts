@@ -8,6 +8,7 @@ import { availableParallelism, cpus, loadavg, tmpdir } from "node:os";
 import path from "node:path";
 import autocannon from "autocannon";
 import { createMigrator, createSeeder } from "#db/migrator.ts";
+import { demoParts } from "#seeds/data/parts.ts";
 import { startAppServer } from "#tests/setup/app-server.ts";
 import { connect, dropDatabase, ensureClusterUp, recreateDatabase } from "#tests/setup/databases.ts";
 import { generateCompactPartsCsv, LIBRARIAN } from "#tests/setup/intake-helpers.ts";
@@ -125,7 +126,7 @@ async function main() {
     const probe = await fetch(`${app.url}${QUERY}`, { headers: { cookie } });
     const probeBody = (await probe.json()) as { total: number };
     console.log(`Betasift catalogue API bench (${process.version}, ${cpus()[0]?.model ?? "unknown CPU"})`);
-    console.log(`  GET ${QUERY}: ${probe.status}, ${probeBody.total} matching of ${EXTRA_PARTS + 87} parts`);
+    console.log(`  GET ${QUERY}: ${probe.status}, ${probeBody.total} matching of ${EXTRA_PARTS + demoParts.length} parts`);
     // Warm every worker (each loads its copy of the catalogue on first use) before measuring the steady state.
     await autocannon({ url: `${app.url}${QUERY}`, connections: 10, duration: 2, headers: { cookie } });
     const loadBefore = loadavg();
@@ -136,7 +137,7 @@ async function main() {
     const results = {
       node: process.version,
       cpu: cpus()[0]?.model ?? "unknown",
-      parts: EXTRA_PARTS + 87,
+      parts: EXTRA_PARTS + demoParts.length,
       query: QUERY,
       connections: CONNECTIONS,
       durationS: DURATION_S,

@@ -65,7 +65,7 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   await expect.poll(() => page.textContent("h1")).toBe("parts-messy.csv");
   const problems = page.getByTestId("problems-table");
   const icMaxRow = problems.locator("tbody tr", { hasText: "ic_max" });
-  await expect.poll(() => icMaxRow.locator("td").allTextContents()).toEqual(["8", "ic_max", "45 V", "a voltage (V) where a current is expected", "error"]);
+  await expect.poll(() => icMaxRow.locator("td").allTextContents()).toEqual(["8", "ic_max", "48 V", "a voltage (V) where a current is expected", "error"]);
   const partNumberRow = problems.locator("tbody tr", { hasText: "part_number" });
   await expect.poll(() => partNumberRow.locator("td").first().textContent()).toBe("11");
   expect(await page.locator('[data-count="rejected"] dd').textContent()).toBe("4");
@@ -80,18 +80,18 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
 
   // The catalogue finds the committed part by search; the view lives in the URL.
   await page.goto(`${inject("appUrl")}/catalogue`);
-  await page.getByLabel("Search manufacturer or part number").fill("OSK4460N");
+  await page.getByLabel("Search manufacturer or part number").fill("OSK4560N");
   await page.getByRole("button", { name: "Apply filters" }).click();
-  await page.waitForURL((url) => url.searchParams.get("q") === "OSK4460N");
+  await page.waitForURL((url) => url.searchParams.get("q") === "OSK4560N");
   const table = page.getByTestId("catalogue-table");
   await expect.poll(() => table.locator("tbody tr").count()).toBe(1);
   expect(await table.locator("tbody tr").first().textContent()).toContain("Ostrevik Semiconductor");
   expect(await page.getByTestId("result-count").first().textContent()).toBe("1–1 of 1 part");
   await page.screenshot({ path: artifactPath("catalogue-search.png"), fullPage: true, caret: "initial" });
 
-  await table.getByRole("link", { name: "OSK4460N" }).click();
+  await table.getByRole("link", { name: "OSK4560N" }).click();
   await page.waitForURL(/\/catalogue\/[0-9a-f-]{36}$/);
-  await expect.poll(() => page.textContent("h1")).toContain("OSK4460N");
+  await expect.poll(() => page.textContent("h1")).toContain("OSK4560N");
   const plot = page.getByTestId("gain-plot");
   expect(await plot.evaluate((node) => node.tagName.toLowerCase())).toBe("svg");
   expect(await plot.locator('g[data-series="min"] circle').count()).toBe(2);
@@ -110,14 +110,14 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
 
   // A second file corrects VCEO of the same part; the first intake can then not be rolled back on its own.
   const [header, , , row4] = readFileSync(MESSY_FILE, "utf8").split(/\r?\n/);
-  const correction = `${header}\n${row4!.replace("SOT-23,,45,50,", "SOT-23,,50,50,")}\n`;
+  const correction = `${header}\n${row4!.replace("SOT-23,,28,36,", "SOT-23,,30,36,")}\n`;
   await page.goto(`${inject("appUrl")}/intakes/new`);
-  await page.getByTestId("drop-zone-input").setInputFiles({ name: "osk4460n-vceo.csv", mimeType: "text/csv", buffer: Buffer.from(correction) });
+  await page.getByTestId("drop-zone-input").setInputFiles({ name: "osk4560n-vceo.csv", mimeType: "text/csv", buffer: Buffer.from(correction) });
   await page.getByRole("button", { name: "Upload and preview" }).click();
   await page.waitForURL((url) => /\/intakes\/[0-9a-f-]{36}$/.test(url.pathname) && url.href !== intakeUrl);
-  await expect.poll(() => page.textContent("h1")).toBe("osk4460n-vceo.csv");
+  await expect.poll(() => page.textContent("h1")).toBe("osk4560n-vceo.csv");
   const change = page.locator('[data-change-row="2"]');
-  await expect.poll(() => change.locator("tbody tr").first().locator("td").allTextContents()).toEqual(["VCEO", "45 V", "→", "50 V"]);
+  await expect.poll(() => change.locator("tbody tr").first().locator("td").allTextContents()).toEqual(["VCEO", "28 V", "→", "30 V"]);
   await page.screenshot({ path: artifactPath("intake-change-preview.png"), fullPage: true, caret: "initial" });
   await page.getByRole("button", { name: "Commit 1 part" }).click();
   await expect.poll(() => page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
@@ -127,7 +127,7 @@ it("a librarian drops a messy parts file, reads its problems, commits it, finds 
   await page.getByText("Roll back this intake…").click();
   await page.screenshot({ path: artifactPath("intake-rollback-confirm.png"), fullPage: true, caret: "initial" });
   await page.getByRole("button", { name: "Yes, roll back parts-messy.csv" }).click();
-  await expect.poll(() => page.getByRole("alert").first().textContent()).toContain("osk4460n-vceo.csv");
+  await expect.poll(() => page.getByRole("alert").first().textContent()).toContain("osk4560n-vceo.csv");
   expect(await page.locator("[data-state]").first().getAttribute("data-state")).toBe("committed");
   await page.screenshot({ path: artifactPath("intake-rollback-refused.png"), fullPage: true, caret: "initial" });
   expect(pageErrors).toEqual([]);

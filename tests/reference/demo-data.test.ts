@@ -6,9 +6,12 @@ import { parseOffersFile } from "#app/domain/intake/parse-offers.ts";
 import { parsePartsFile } from "#app/domain/intake/parse-parts.ts";
 import { writeOffersCsv, writePartsCsv } from "#app/domain/intake/write-csv.ts";
 import { type GainPoint, type PartSpec, partKey } from "#app/domain/part.ts";
+import { messyIntakeParts } from "#seeds/data/generated-parts.ts";
 import { demoManufacturers } from "#seeds/data/manufacturers.ts";
 import { demoOffers, demoSuppliers } from "#seeds/data/offers.ts";
 import { demoComplementaryPairs, demoParts } from "#seeds/data/parts.ts";
+import { offersTemplateExample, partsTemplateExample, TEMPLATE_EXAMPLE_PART_NUMBER } from "#seeds/data/template-example.ts";
+import { renderDemoFixtures } from "#seeds/demo-fixtures.ts";
 
 // Numbering schemes of registered and house-coded parts that the demo must never imitate (the project's rule).
 const REGISTERED_LOOKING =
@@ -100,6 +103,14 @@ describe("demo catalogue: families", () => {
         npn.vceoVolts,
       ]);
     }
+  });
+
+  // The bins issue 9 names as a well-known commercial family's: the demo's gain groups must be its own.
+  it("sells gain groups of its own, not the bin set issue 9 names", () => {
+    const ranges = demoParts.flatMap((part) =>
+      part.gainPoints.filter((point) => point.hfeMin !== null && point.hfeMax !== null).map((point) => [point.hfeMin, point.hfeMax]),
+    );
+    for (const named of [[110, 220], [200, 450], [420, 800]]) expect(ranges).not.toContainEqual(named);
   });
 
   it("has high-gain small-signal parts, most of them with an Early voltage", () => {
@@ -317,6 +328,8 @@ describe("demo intake files in fixtures/demo", () => {
   it("are up to date with the TypeScript data (rerun npx tsx seeds/write-demo-fixtures.ts)", () => {
     expect(readFixture("parts.csv").toString("utf8")).toBe(writePartsCsv(demoParts));
     expect(readFixture("offers.csv").toString("utf8")).toBe(writeOffersCsv(demoOffers));
+    const rendered = renderDemoFixtures(demoParts, messyIntakeParts, demoOffers);
+    for (const name of ["parts.csv", "offers.csv", "parts-messy.csv"]) expect(readFixture(name).toString("utf8"), name).toBe(rendered[name]);
   });
 
   it("parse back to the demo parts with no error", () => {
@@ -355,11 +368,53 @@ describe("messy librarian file fixtures/demo/parts-messy.csv", () => {
   });
 
   it("reads units typed in cells, both micro spellings and the header's unit", () => {
-    expect(byNumber.get("OSK4460N")?.gainPoints[0].icAmps).toBeCloseTo(10e-6, 15);
-    expect(byNumber.get("MLB483T")?.gainPoints[0].icAmps).toBeCloseTo(10e-6, 15);
-    expect(byNumber.get("OSK2250N")?.icMaxAmps).toBeCloseTo(0.6, 12);
-    expect(byNumber.get("VPD6170")?.icMaxAmps).toBe(8);
-    expect(byNumber.get("OSK2250P")?.saturationPoints[0].vceSatMaxVolts).toBeCloseTo(0.4, 12);
-    expect(byNumber.get("QX15-080")?.lifecycle).toBe("last-time-buy");
+    // Expected values: the generated parts of the same families (seeds/data/generated-parts.ts, messyIntakeParts).
+    const generated = (partNumber: string) => messyIntakeParts.find((part) => part.partNumber === partNumber);
+    expect(byNumber.get("OSK4560N")?.gainPoints[0].icAmps).toBeCloseTo(10e-6, 15);
+    expect(byNumber.get("MLB468T")?.gainPoints[0].icAmps).toBeCloseTo(10e-6, 15);
+    expect(byNumber.get("OSK2750N")?.icMaxAmps).toBeCloseTo(0.35, 12);
+    expect(byNumber.get("VPD6147")?.icMaxAmps).toBe(7);
+    expect(byNumber.get("OSK2750P")?.saturationPoints[0].vceSatMaxVolts).toBeCloseTo(generated("OSK2750P")!.saturationPoints[0].vceSatMaxVolts!, 12);
+    expect(byNumber.get("QX15-060")?.lifecycle).toBe("last-time-buy");
+  });
+
+  it("carries the generated parts' ratings, gain and saturation figures, however they are spelled", () => {
+    expect(result.rows.length).toBe(12);
+    for (const { value } of result.rows) {
+      const part = messyIntakeParts.find((candidate) => candidate.partNumber === value.partNumber)!;
+      expect(part, value.partNumber).toBeDefined();
+      const close = (a: number | null, b: number | null) => (a === null || b === null ? a === b : Math.abs(a - b) <= 1e-12 * Math.abs(b));
+      for (const field of ["vceoVolts", "vcboVolts", "veboVolts", "icMaxAmps", "ptotWatts", "tjMaxC", "vbeOnVolts", "ftHz", "cobFarads", "earlyVolts"] as const) {
+        expect(close(value[field], part[field]), `${value.partNumber} ${field}`).toBe(true);
+      }
+      part.gainPoints.slice(0, 2).forEach((point, k) => {
+        for (const field of ["icAmps", "hfeMin", "hfeTyp", "hfeMax"] as const) {
+          expect(close(value.gainPoints[k][field], point[field]), `${value.partNumber} gain ${k + 1} ${field}`).toBe(true);
+        }
+      });
+      expect(close(value.saturationPoints[0].vceSatMaxVolts, part.saturationPoints[0].vceSatMaxVolts), value.partNumber).toBe(true);
+    }
+  });
+});
+
+describe("intake template example rows (seeds/data/template-example.ts)", () => {
+  const encode = (row: Record<string, string>) =>
+    new TextEncoder().encode(`${Object.keys(row).join(",")}\n${Object.values(row).map((cell) => (cell.includes(",") ? `"${cell}"` : cell)).join(",")}\n`);
+
+  it("come from a demo part and one of its offers, and parse back to them without a problem", () => {
+    const part = demoParts.find((candidate) => candidate.partNumber === TEMPLATE_EXAMPLE_PART_NUMBER)!;
+    expect(part.manufacturer).not.toMatch(/larkfield/i);
+    const parts = parsePartsFile(encode(partsTemplateExample));
+    expect(parts.problems).toEqual([]);
+    const { gainPoints, saturationPoints, ...ratings } = parts.rows[0].value;
+    const { gainPoints: partGain, saturationPoints: partSat, ...partRatings } = part;
+    expect(ratings).toEqual(partRatings);
+    expect(partGain).toContainEqual(gainPoints[0]);
+    expect(saturationPoints[0]).toEqual(partSat[0]);
+    const offers = parseOffersFile(encode(offersTemplateExample));
+    expect(offers.problems).toEqual([]);
+    const offer = offers.rows[0].value;
+    const demo = demoOffers.find((row) => row.partNumber === offer.partNumber && row.offer.supplier === offer.offer.supplier)!;
+    expect(offer.offer).toEqual({ ...demo.offer, priceBreaks: demo.offer.priceBreaks.slice(0, 1) });
   });
 });

@@ -19,17 +19,17 @@ function queryOf(search: string): PartListQuery {
 const ROW: CatalogueRow = {
   id: "6f0c5a43-5f0e-4a53-9d0e-0b0c8c7c1a11",
   manufacturer: "Ostrevik Semiconductor",
-  partNumber: "OSK4460N",
+  partNumber: "OSK4560N",
   polarity: "npn",
   packageName: "SOT-23",
   configuration: "single",
-  vceoVolts: 45,
-  icMaxAmps: 0.1,
-  ptotWatts: 0.35,
-  ftHz: 250e6,
+  vceoVolts: 28,
+  icMaxAmps: 0.06,
+  ptotWatts: 0.27,
+  ftHz: 240e6,
   lifecycle: "nrnd",
   hfeAtChosen: 212.4,
-  hfeSummary: "420–800 @ 2 mA",
+  hfeSummary: "340–930 @ 500 µA",
   offerCount: 2,
   bestUnitPrice: { amount: 0.085, currency: "EUR" },
   stockTotal: 12500,
@@ -40,8 +40,8 @@ describe("CatalogueTable", () => {
   it("prints values in engineering notation with units, right-aligned", () => {
     const query = queryOf("cols=partNumber&cols=vceo&cols=icMax&cols=ptot&cols=ft&cols=price&cols=stock&cols=lifecycle");
     const html = render(<CatalogueTable rows={[ROW]} columns={visibleColumns(query)} query={query} total={1} />);
-    for (const text of [">45 V<", ">100 mA<", ">350 mW<", ">250 MHz<", ">0.085 EUR<", ">12,500<", ">NRND<"]) expect(html).toContain(text);
-    expect(html).toMatch(/<td class="[^"]*text-right tabular-nums[^"]*">45 V<\/td>/);
+    for (const text of [">28 V<", ">60 mA<", ">270 mW<", ">240 MHz<", ">0.085 EUR<", ">12,500<", ">NRND<"]) expect(html).toContain(text);
+    expect(html).toMatch(/<td class="[^"]*text-right tabular-nums[^"]*">28 V<\/td>/);
     // Flags ride beside the part number when their own column is hidden.
     expect(html).toContain('data-flag="early-unknown"');
   });
@@ -50,7 +50,7 @@ describe("CatalogueTable", () => {
     const query = queryOf("hfeAt=20mA&cols=partNumber&cols=hfe");
     const html = render(<CatalogueTable rows={[ROW]} columns={visibleColumns(query)} query={query} total={1} />);
     expect(html).toContain("hFE @ 20 mA");
-    expect(html).toMatch(/title="worst-case hFE at 20 mA; quoted 420–800 @ 2 mA">212</);
+    expect(html).toMatch(/title="worst-case hFE at 20 mA; quoted 340–930 @ 500 µA">212</);
     expect(html).toContain(`href="/catalogue/${ROW.id}?ic=20mA"`);
   });
 
@@ -65,8 +65,8 @@ describe("CatalogueTable", () => {
 
 describe("Pager", () => {
   it("gives the range, the total and links to the neighbouring pages", () => {
-    const html = render(<Pager query={queryOf("page=2&size=25&q=osk")} total={87} />);
-    expect(html).toContain("26–50 of 87 parts");
+    const html = render(<Pager query={queryOf("page=2&size=25&q=osk")} total={89} />);
+    expect(html).toContain("26–50 of 89 parts");
     expect(html).toContain("page 2 of 4");
     expect(html).toContain('href="/catalogue?size=25&amp;q=osk"');
     expect(html).toContain('href="/catalogue?page=3&amp;size=25&amp;q=osk"');

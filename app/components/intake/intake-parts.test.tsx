@@ -12,8 +12,8 @@ function render(element: React.ReactElement): string {
 // The problems fixtures/demo/parts-messy.csv gives (see tests/reference/demo-data.test.ts), trimmed.
 const PROBLEMS: ShownProblem[] = [
   { row: 1, column: "colour", value: "Colour", message: 'unknown column "colour" is ignored', severity: "warning" },
-  { row: 6, column: "gain2_hfe_min", value: "450", message: "gain point 2: hFE min (450) is above hFE max (200)", severity: "error" },
-  { row: 8, column: "ic_max", value: "45 V", message: "a voltage (V) where a current is expected", severity: "error" },
+  { row: 6, column: "gain2_hfe_min", value: "430", message: "gain point 2: hFE min (430) is above hFE max (235)", severity: "error" },
+  { row: 8, column: "ic_max", value: "48 V", message: "a voltage (V) where a current is expected", severity: "error" },
   { row: 11, column: "part_number", value: null, message: "part number is required", severity: "error" },
 ];
 
@@ -21,7 +21,7 @@ describe("ProblemsTable", () => {
   it("shows each problem with row, column, value, message and severity", () => {
     const html = render(<ProblemsTable problems={PROBLEMS} />);
     expect(html).toContain('data-testid="problems-table"');
-    expect(html).toMatch(/<tr[^>]*data-severity="error"[^>]*><td[^>]*>8<\/td><td[^>]*>ic_max<\/td><td[^>]*>45 V<\/td><td[^>]*>a voltage \(V\) where a current is expected<\/td>/);
+    expect(html).toMatch(/<tr[^>]*data-severity="error"[^>]*><td[^>]*>8<\/td><td[^>]*>ic_max<\/td><td[^>]*>48 V<\/td><td[^>]*>a voltage \(V\) where a current is expected<\/td>/);
     expect(html).toContain(">empty<");
     expect(html).toContain("All 4");
     expect(html).toContain("Errors 3");
@@ -58,22 +58,22 @@ describe("ChangeList", () => {
             row: 2,
             status: "changed",
             manufacturer: "Ostrevik Semiconductor",
-            partNumber: "OSK2250N",
+            partNumber: "OSK2750N",
             fields: [
-              { field: "vceoVolts", before: 40, after: 45 },
-              { field: "icMaxAmps", before: 0.6, after: 0.8 },
+              { field: "vceoVolts", before: 36, after: 40 },
+              { field: "icMaxAmps", before: 0.35, after: 0.5 },
               { field: "lifecycle", before: "active", after: "nrnd" },
             ],
           },
-          { row: 3, status: "new", manufacturer: "Maelbrook Devices", partNumber: "MLB483T", fields: [] },
-          { row: 4, status: "unchanged", manufacturer: "Maelbrook Devices", partNumber: "MLB583T", fields: [] },
+          { row: 3, status: "new", manufacturer: "Maelbrook Devices", partNumber: "MLB468T", fields: [] },
+          { row: 4, status: "unchanged", manufacturer: "Maelbrook Devices", partNumber: "MLB568T", fields: [] },
         ]}
       />,
     );
-    expect(html).toMatch(/VCEO<\/td><td[^>]*>40 V<\/td><td[^>]*>→<\/td><td[^>]*>45 V<\/td>/);
-    expect(html).toMatch(/IC max<\/td><td[^>]*>600 mA<\/td><td[^>]*>→<\/td><td[^>]*>800 mA<\/td>/);
+    expect(html).toMatch(/VCEO<\/td><td[^>]*>36 V<\/td><td[^>]*>→<\/td><td[^>]*>40 V<\/td>/);
+    expect(html).toMatch(/IC max<\/td><td[^>]*>350 mA<\/td><td[^>]*>→<\/td><td[^>]*>500 mA<\/td>/);
     expect(html).toContain("not recommended for new designs");
-    expect(html).toContain("MLB483T");
+    expect(html).toContain("MLB468T");
     expect(html).toContain("1 part in the file matches the catalogue exactly and stays as it is.");
   });
 });
@@ -89,8 +89,8 @@ describe("IntakeCountsBar", () => {
 
 describe("CountsInline", () => {
   it("leaves zero counts out of the intake list", () => {
-    const html = renderToString(<CountsInline counts={{ new: 87, changed: 0, unchanged: 0, rejected: 4, warnings: 0 }} />);
-    expect(html).toContain(">87 new<");
+    const html = renderToString(<CountsInline counts={{ new: 89, changed: 0, unchanged: 0, rejected: 4, warnings: 0 }} />);
+    expect(html).toContain(">89 new<");
     expect(html).toContain("4 rejected");
     expect(html).not.toContain("changed");
     expect(renderToString(<CountsInline counts={{ new: 0, changed: 0, unchanged: 0, rejected: 0, warnings: 0 }} />)).toContain("no rows");
