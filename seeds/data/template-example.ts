@@ -23,7 +23,8 @@ function exampleRow(kind: "parts" | "offers", fields: Record<string, unknown>, p
   const row: Record<string, string> = {};
   for (const column of format.columns) row[column.name] = spellCell(column, fields[column.field]);
   for (const group of format.groups) {
-    for (const column of group.columns) row[groupColumnName(group, 1, column)] = spellCell(column, points[group.prefix][column.field]);
+    // An alternative spelling of other columns (hFE as "100-300") is left out of the template, as the template does.
+    for (const column of group.columns) if (!column.alternative) row[groupColumnName(group, 1, column)] = spellCell(column, points[group.prefix][column.field]);
   }
   return row;
 }

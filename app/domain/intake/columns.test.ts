@@ -14,10 +14,10 @@ describe("intake formats", () => {
     const parts = parsePartsFile(encode(templateCsv("parts")));
     expect(parts.problems).toEqual([]);
     expect(parts.rows).toHaveLength(1);
-    expect(parts.rows[0].value).toMatchObject({ partNumber: "LS-N100", vceoVolts: 45, icMaxAmps: 0.1, ftHz: 2.5e8 });
+    expect(parts.rows[0].value).toMatchObject({ partNumber: "TW-G3152", vceoVolts: 55, icMaxAmps: 1.8, ftHz: 6.2e7 });
     const offers = parseOffersFile(encode(templateCsv("offers")));
     expect(offers.problems).toEqual([]);
-    expect(offers.rows[0].value.offer).toMatchObject({ stock: 12000, currency: "EUR", priceBreaks: [{ quantity: 10, unitPrice: 0.085 }] });
+    expect(offers.rows[0].value.offer).toMatchObject({ stock: 6900, currency: "EUR", priceBreaks: [{ quantity: 1, unitPrice: 0.27 }] });
   });
 
   it("starts each template with the header the documentation lists", () => {
@@ -36,7 +36,7 @@ describe("intake formats", () => {
       unit: "V",
       required: "yes",
       description: "Collector-emitter voltage rating, base open.",
-      example: "45 V",
+      example: "55 V",
       plausible: "above 0 V up to 3 kV",
     });
     expect(docs.find((d) => d.name === "gainN_hfe_min")).toMatchObject({ type: "number, or a range 100-300", unit: "", plausible: "above 0 up to 100000" });
