@@ -26,7 +26,7 @@ export function Layout({ children }: { children: React.ReactNode }) {
       </head>
       <body className="min-h-screen font-sans antialiased">
         <AppHeader user={rootData?.user ?? null} />
-        <main className="mx-auto max-w-6xl px-6 py-8">{children}</main>
+        <main className="mx-auto max-w-6xl px-4 py-6 sm:px-6 sm:py-8">{children}</main>
         <ScrollRestoration nonce={nonce} />
         <Scripts nonce={nonce} />
       </body>

@@ -6,6 +6,7 @@ export default [
   route("sign-in/verify", "routes/auth/verify.tsx"),
   route("sign-in/link", "routes/auth/magic-link.ts"),
   route("sign-out", "routes/auth/sign-out.ts"),
+  route("design", "routes/design.tsx"),
   ...prefix("catalogue", [
     index("routes/catalogue/list.tsx"),
     route(":partId", "routes/catalogue/part.tsx"),

@@ -39,6 +39,7 @@ const rows: Row[] = [
   { method: "GET", path: "/sign-in/verify", expect: { ...everyone(302) } },
   { method: "GET", path: "/sign-in/link", expect: everyone(302) },
   { method: "POST", path: "/sign-out", expect: everyone(302), fresh: true },
+  { method: "GET", path: "/design", expect: signedIn(200) },
   { method: "GET", path: "/people", expect: pageFor([]) },
   { method: "POST", path: "/people", expect: pageFor([], 400) },
   { method: "GET", path: (ids) => `/people/${ids.librarianId}`, expect: pageFor([]) },

@@ -31,12 +31,16 @@ export function TextField({
   );
 }
 
-export function Button({ children, ...props }: React.ButtonHTMLAttributes<HTMLButtonElement>) {
+const BUTTON_LOOKS = {
+  primary: "bg-signal font-medium text-white hover:bg-signal/90",
+  secondary: "border border-rule bg-white hover:bg-paper",
+  danger: "border border-fault text-fault hover:bg-fault-soft",
+} as const;
+
+/** The one button: primary for the page's main action, secondary for the rest, danger for what cannot be undone. */
+export function Button({ children, look = "primary", className = "", ...props }: React.ButtonHTMLAttributes<HTMLButtonElement> & { look?: keyof typeof BUTTON_LOOKS }) {
   return (
-    <button
-      className="rounded bg-signal px-4 py-2 font-medium text-white hover:bg-signal/90 disabled:opacity-60"
-      {...props}
-    >
+    <button className={`rounded px-4 py-2 disabled:opacity-60 ${BUTTON_LOOKS[look]} ${className}`} {...props}>
       {children}
     </button>
   );
