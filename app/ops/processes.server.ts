@@ -1,8 +1,19 @@
 import { execFileSync, spawn, type ChildProcess } from "node:child_process";
 
-export function runStep(label: string, command: string, args: string[], options: { cwd: string; env?: NodeJS.ProcessEnv }) {
+/** Runs one step; its own output is shown only when it fails (or with `loud`), so the start log stays short. */
+export function runStep(label: string, command: string, args: string[], options: { cwd: string; env?: NodeJS.ProcessEnv; loud?: boolean }) {
   console.log(`betasift: ${label}`);
-  execFileSync(command, args, { cwd: options.cwd, env: options.env ?? process.env, stdio: "inherit" });
+  if (options.loud) {
+    execFileSync(command, args, { cwd: options.cwd, env: options.env ?? process.env, stdio: "inherit" });
+    return;
+  }
+  try {
+    execFileSync(command, args, { cwd: options.cwd, env: options.env ?? process.env, stdio: "pipe" });
+  } catch (error) {
+    const { stdout, stderr } = error as { stdout?: Buffer; stderr?: Buffer };
+    process.stderr.write(`${stdout?.toString() ?? ""}${stderr?.toString() ?? ""}`);
+    throw new Error(`${label} failed`);
+  }
 }
 
 export function startService(command: string, args: string[], options: { cwd: string; env?: NodeJS.ProcessEnv; quiet?: boolean }): ChildProcess {

@@ -37,7 +37,7 @@ async function main() {
   process.on("SIGTERM", () => void shutdown(0));
 
   try {
-    runStep("starting PostgreSQL", "bash", [pgScript, "up"], { cwd: root });
+    runStep("starting PostgreSQL", "bash", [pgScript, "up"], { cwd: root, loud: true });
     const databaseUrl = execFileSync("bash", [pgScript, "url", "dev"], { encoding: "utf8" }).trim();
     const inboxUrl = `http://127.0.0.1:${inboxPort}`;
     const serverEnv: NodeJS.ProcessEnv = {
