@@ -52,6 +52,8 @@ export function ErrorBoundary({ error }: Route.ErrorBoundaryProps) {
   }
   return (
     <section className="max-w-2xl">
+      {/* React puts this in the head: an error page has a title of its own too. */}
+      <title>{`${title} · Betasift`}</title>
       <h1 className="text-2xl font-semibold">{title}</h1>
       <p className="mt-3 text-base">{detail}</p>
       {stack ? <pre className="mt-4 overflow-x-auto rounded bg-white p-4 text-xs">{stack}</pre> : null}
