@@ -37,6 +37,13 @@ export default function Dashboard({ loaderData }: Route.ComponentProps) {
           </li>
         ))}
       </ul>
+      <p className="mt-10 text-sm text-ink/70">
+        How Betasift shows verdicts, findings and values:{" "}
+        <Link to="/design" className="text-signal underline">
+          the design language
+        </Link>
+        .
+      </p>
     </section>
   );
 }
